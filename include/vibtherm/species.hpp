@@ -1,0 +1,52 @@
+// The species model: what a frequency job tells us about one molecule, radical,
+// transition state or adsorbate, in SI-friendly units, independent of the input format.
+#pragma once
+
+#include <Eigen/Core>
+#include <array>
+#include <map>
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "vibtherm/error.hpp"
+
+namespace vibtherm {
+
+enum class Phase { gas, adsorbate };
+
+struct Atom {
+  std::string symbol;        // element symbol, e.g. "C"
+  std::string isotope;       // isotope label as given ("D", "C13"); empty = most abundant
+  int mass_number = 0;       // mass number of the isotope used
+  double mass_amu = 0.0;     // mass of the isotope used
+  Eigen::Vector3d position_angstrom = Eigen::Vector3d::Zero();
+};
+
+struct ElectronicLevel {
+  double energy_cm1 = 0.0;  // above the ground level
+  int degeneracy = 1;
+};
+
+// Alternative to atoms: the rigid-rotor data given directly.
+struct RigidRotorData {
+  double mass_amu = 0.0;
+  std::vector<double> moments_amu_A2;  // 1 value (linear) or 3; empty for an atom
+  bool linear = false;
+};
+
+struct Species {
+  std::string name;
+  SourceLocation origin;                   // file the species came from
+  std::vector<Atom> atoms;                 // empty when `rotor_data` is used
+  std::optional<RigidRotorData> rotor_data;
+  std::map<std::string, int> formula;      // element -> count; from atoms or `formula`
+  std::vector<double> frequencies_cm1;     // as given; negative = imaginary
+  int symmetry_number = 1;
+  std::vector<ElectronicLevel> electronic_levels{{0.0, 1}};
+  std::optional<double> enthalpy_of_formation_J_per_mol;  // ΔfH°(298.15 K)
+  Phase phase = Phase::gas;
+  bool transition_state = false;
+};
+
+}  // namespace vibtherm

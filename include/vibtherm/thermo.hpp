@@ -1,0 +1,63 @@
+// The thermochemistry engine: prepares a species under the model options (rotor analysis,
+// mode-count and imaginary-frequency policy, scaling) and evaluates the ideal-gas (or
+// adsorbate) functions at any temperature, with the per-motion breakdown.
+#pragma once
+
+#include <string>
+#include <vector>
+
+#include "vibtherm/constants.hpp"
+#include "vibtherm/geometry.hpp"
+#include "vibtherm/partition.hpp"
+#include "vibtherm/species.hpp"
+
+namespace vibtherm {
+
+enum class StandardState { bar, atm, molar };  // 1 bar (IUPAC default), 1 atm, 1 mol/L
+
+struct ModelOptions {
+  StandardState standard_state = StandardState::bar;
+  double pressure_Pa = constants::bar_Pa;  // used for bar/atm; overrides if set explicitly
+  double frequency_scale = 1.0;            // multiplies every wavenumber
+  bool transition_state = false;           // drop one imaginary mode as reaction coordinate
+  double imaginary_as_real_below_cm1 = 0.0;  // |ν̃| below this: treated as real, with a warning
+  bool mode_count_mismatch_is_warning = false;
+  double linear_tolerance_amu_A2 = default_linear_tolerance_amu_A2;
+};
+
+struct PreparedSpecies {
+  Species species;
+  ModelOptions options;
+  RotorAnalysis rotor;
+  bool is_gas = true;
+  std::vector<double> vibrations_cm1;  // real wavenumbers used, scaled, input order
+  std::vector<double> used_frequencies_cm1;  // as reported: includes a dropped reaction coordinate (negative)
+  double zero_point_energy_J_per_mol = 0.0;
+  std::vector<std::string> warnings;  // things the user must see
+  std::vector<std::string> notes;     // model choices worth stating
+};
+
+// Validates and prepares. Throws InputError (located at the species file) for imaginary
+// frequencies not allowed by the options and for a wrong mode count unless downgraded.
+PreparedSpecies prepare_species(const Species& species, const ModelOptions& options = {});
+
+struct ThermoPoint {
+  double T_K = 0.0;
+  MotionTerms translation, rotation, vibration, electronic;  // dimensionless, per motion
+  double Cv_J_per_mol_K = 0.0;
+  double Cp_J_per_mol_K = 0.0;
+  double S_J_per_mol_K = 0.0;
+  double H_minus_H0_J_per_mol = 0.0;    // thermal enthalpy above the 0 K (zero-point) level
+  double H_minus_H298_J_per_mol = 0.0;
+  double G_minus_H298_J_per_mol = 0.0;
+  double gibbs_function_J_per_mol_K = 0.0;  // −[G(T) − H(298.15 K)] / T
+};
+
+ThermoPoint evaluate(const PreparedSpecies& prepared, double T_K);
+std::vector<ThermoPoint> tabulate(const PreparedSpecies& prepared, const std::vector<double>& temperatures_K);
+
+// Classical (equipartition) limit of Cv/R: translation 3/2, rotation 1 or 3/2, one per
+// vibration; for an adsorbate 3N.
+double classical_Cv_over_R(const PreparedSpecies& prepared);
+
+}  // namespace vibtherm
