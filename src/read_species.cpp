@@ -2,6 +2,7 @@
 // checks (mode counts, rotor type) belong to the engine.
 #include "vibtherm/read_species.hpp"
 
+#include <yaml-cpp/eventhandler.h>
 #include <yaml-cpp/yaml.h>
 
 #include <algorithm>
@@ -237,6 +238,26 @@ const std::vector<std::string> yaml_keys = {"name",
 // Part of the format (design.md section 4) but not computed by this version.
 const std::set<std::string> unsupported_keys = {"hindered_rotors", "hessian", "hessian_unit"};
 
+// Records where the documents of a YAML text start, through yaml-cpp's event parser.
+// yaml-cpp 0.7 never consumes a ',' where a document's root node should start (", 1",
+// "--- ,"): YAML::LoadAll then yields empty documents forever at that position until
+// memory runs out (found by fuzzing). Two documents starting at one mark reveal it.
+class DocumentCounter : public YAML::EventHandler {
+ public:
+  std::vector<YAML::Mark> starts;
+  void OnDocumentStart(const YAML::Mark& mark) override { starts.push_back(mark); }
+  void OnDocumentEnd() override {}
+  void OnNull(const YAML::Mark&, YAML::anchor_t) override {}
+  void OnAlias(const YAML::Mark&, YAML::anchor_t) override {}
+  void OnScalar(const YAML::Mark&, const std::string&, YAML::anchor_t, const std::string&) override {}
+  void OnSequenceStart(const YAML::Mark&, const std::string&, YAML::anchor_t,
+                       YAML::EmitterStyle::value) override {}
+  void OnSequenceEnd() override {}
+  void OnMapStart(const YAML::Mark&, const std::string&, YAML::anchor_t, YAML::EmitterStyle::value) override {
+  }
+  void OnMapEnd() override {}
+};
+
 class YamlReader {
  public:
   explicit YamlReader(const std::string& file_name) : file_(file_name) {}
@@ -303,7 +324,8 @@ YamlReader::Entries YamlReader::entries(const YAML::Node& map, const std::string
                                         const std::vector<std::string>& allowed) const {
   Entries out;
   for (auto it = map.begin(); it != map.end(); ++it) {
-    const YAML::Node& key = it->first;
+    // A copy: the iterator's pair is a temporary, a reference to its member would dangle.
+    const YAML::Node key = it->first;
     if (!key.IsScalar()) error(key, "a key of " + what + " is " + describe(key) + ", expected a plain name");
     const std::string& k = key.Scalar();
     if (std::find(allowed.begin(), allowed.end(), k) == allowed.end()) {
@@ -588,20 +610,31 @@ std::map<std::string, int> YamlReader::formula(const YAML::Node& node) const {
 
 Species YamlReader::read(const std::string& text) {
   require_text(text, file_);
-  std::vector<YAML::Node> documents;
+  YAML::Node root;
   try {
-    documents = YAML::LoadAll(text);
+    std::istringstream stream(text);
+    YAML::Parser parser(stream);
+    DocumentCounter counter;
+    while (counter.starts.size() < 3 && parser.HandleNextDocument(counter)) {
+    }
+    if (counter.starts.size() == 3 && counter.starts[1].pos == counter.starts[2].pos) {
+      const YAML::Mark& stuck = counter.starts[1];
+      fail({file_, stuck.line + 1, stuck.column + 1},
+           "malformed YAML: a document cannot start with ',', expected a YAML map of species keys");
+    }
+    if (counter.starts.size() > 1) {
+      const YAML::Mark& second = counter.starts[1];
+      fail({file_, second.line + 1, second.column + 1},
+           "file holds more than one YAML document, expected one species per file");
+    }
+    root = YAML::Load(text);
   } catch (const YAML::Exception& e) {
     SourceLocation where{file_, 0, 0};
     if (!e.mark.is_null()) where = {file_, e.mark.line + 1, e.mark.column + 1};
     fail(where, "malformed YAML: " + e.msg + ", expected a YAML map of species keys");
   }
-  if (documents.empty() || documents.front().IsNull())
+  if (!root.IsDefined() || root.IsNull())
     fail({file_, 0, 0}, "file holds no species, expected a YAML map with at least 'name' and 'atoms'");
-  if (documents.size() > 1)
-    error(documents[1], "file holds " + std::to_string(documents.size()) +
-                            " YAML documents, expected one species per file");
-  const YAML::Node& root = documents.front();
   if (!root.IsMap())
     error(root,
           "top level is " + describe(root) + ", expected a map of species keys such as 'name' and 'atoms'");
@@ -830,6 +863,9 @@ void XyzReader::read_comment_line(std::string_view line, int line_number, Specie
       return v;
     };
     if (key == "name") {
+      for (char c : value)
+        if (static_cast<unsigned char>(c) < 0x20 || c == 0x7f)
+          error(line_number, value_column, "'name' contains a control character, expected a one-line label");
       species.name = value;
     } else if (key == "symmetry_number") {
       species.symmetry_number = positive_integer();
@@ -864,6 +900,8 @@ Species XyzReader::read(const std::string& text) {
   require_text(text, file_);
   std::vector<std::string_view> lines;
   std::string_view rest(text);
+  // A UTF-8 byte-order mark, as some Windows editors write, is not part of the count line.
+  if (rest.starts_with("\xEF\xBB\xBF")) rest.remove_prefix(3);
   while (!rest.empty()) {
     std::size_t newline = rest.find('\n');
     lines.push_back(rest.substr(0, newline));

@@ -190,7 +190,7 @@ TEST_CASE("YAML: error messages carry line and column") {
   CHECK(yaml_error("name: w\nmass: -4\n") ==
         "in.yaml:2:7: error: 'mass' is '-4', expected a positive number");
   CHECK(yaml_error("name: w\n---\nname: v\n") ==
-        "in.yaml:3:1: error: file holds 2 YAML documents, expected one species per file");
+        "in.yaml:2:1: error: file holds more than one YAML document, expected one species per file");
 }
 
 TEST_CASE("XYZ: keys, units and errors") {
@@ -203,6 +203,11 @@ TEST_CASE("XYZ: keys, units and errors") {
   Species free_text = read_species_xyz("1\nEnergy: -527.1 from some job\nAr 0 0 0\n", "dir/argon.xyz");
   CHECK(free_text.name == "argon");
   CHECK(free_text.frequencies_cm1.empty());
+  Species bom = read_species_xyz(
+      "\xEF\xBB\xBF"
+      "1\nname=Ar\nAr 0 0 0\n",
+      "bom.xyz");
+  CHECK(bom.name == "Ar");
 
   CHECK(xyz_error("3\n\nO 0 0 0\nH 0 0.76 -0.52\n") ==
         "in.xyz:4:1: error: file ends after 2 atom line(s), expected 3 (the atom count)");
