@@ -43,9 +43,16 @@ int main(int argc, char** argv) {
   });
   try {
     app.parse(argc, argv);
+  } catch (const CLI::CallForHelp& e) {
+    return app.exit(e);
+  } catch (const CLI::CallForAllHelp& e) {
+    return app.exit(e);
+  } catch (const CLI::CallForVersion& e) {
+    return app.exit(e);
   } catch (const CLI::ParseError& e) {
-    int status = app.exit(e);
-    return status == 0 ? 0 : vibtherm::cli::exit_input_error;
+    // One line, like every other input error.
+    std::cerr << "error: " << e.what() << " (see vibtherm --help)\n";
+    return vibtherm::cli::exit_input_error;
   } catch (const vibtherm::cli::Exit& e) {
     return e.status;
   } catch (const vibtherm::InputError& e) {

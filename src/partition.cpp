@@ -1,0 +1,117 @@
+#include "vibtherm/partition.hpp"
+
+#include <algorithm>
+#include <cmath>
+
+#include "vibtherm/constants.hpp"
+
+namespace vibtherm {
+
+namespace c = constants;
+
+MotionTerms& MotionTerms::operator+=(const MotionTerms& other) {
+  ln_q += other.ln_q;
+  U_over_RT += other.U_over_RT;
+  H_over_RT += other.H_over_RT;
+  Cv_over_R += other.Cv_over_R;
+  Cp_over_R += other.Cp_over_R;
+  S_over_R += other.S_over_R;
+  return *this;
+}
+
+namespace {
+
+// ln[(2π m k T / h²)^{3/2} · volume_per_molecule], the translational ln(q/N).
+double ln_translational_q_per_molecule(double mass_amu, double T_K, double volume_per_molecule_m3) {
+  const double m = mass_amu * c::atomic_mass_constant_kg;
+  const double thermal = 2.0 * c::pi * m * c::boltzmann_J_per_K * T_K / (c::planck_J_s * c::planck_J_s);
+  return 1.5 * std::log(thermal) + std::log(volume_per_molecule_m3);
+}
+
+MotionTerms translation_from_ln_q(double ln_q) {
+  MotionTerms t;
+  t.ln_q = ln_q;
+  t.U_over_RT = 1.5;
+  t.H_over_RT = 2.5;  // U + pV, pV = RT per mole of ideal gas
+  t.Cv_over_R = 1.5;
+  t.Cp_over_R = 2.5;
+  t.S_over_R = ln_q + 2.5;  // Sackur–Tetrode: ln(q/N) + 1 (Stirling) + 3/2
+  return t;
+}
+
+}  // namespace
+
+MotionTerms translation_terms(double mass_amu, double T_K, double pressure_Pa) {
+  return translation_from_ln_q(
+      ln_translational_q_per_molecule(mass_amu, T_K, c::boltzmann_J_per_K * T_K / pressure_Pa));
+}
+
+MotionTerms translation_terms_concentration(double mass_amu, double T_K, double concentration_mol_per_m3) {
+  return translation_from_ln_q(ln_translational_q_per_molecule(
+      mass_amu, T_K, 1.0 / (concentration_mol_per_m3 * c::avogadro_per_mol)));
+}
+
+MotionTerms rigid_rotor_terms(std::span<const double> rotational_temperatures_K, int symmetry_number,
+                              double T_K) {
+  MotionTerms r;
+  if (rotational_temperatures_K.empty()) return r;
+  const double ln_sigma = std::log(static_cast<double>(symmetry_number));
+  if (rotational_temperatures_K.size() == 1) {
+    // Linear rigid rotor, high-temperature limit: q = T / (σ θ).
+    r.ln_q = std::log(T_K / rotational_temperatures_K[0]) - ln_sigma;
+    r.U_over_RT = r.H_over_RT = 1.0;
+    r.Cv_over_R = r.Cp_over_R = 1.0;
+  } else {
+    // Nonlinear: q = √π / σ · T^{3/2} / √(θA θB θC).
+    double ln_theta_product = 0.0;
+    for (double theta : rotational_temperatures_K) ln_theta_product += std::log(theta);
+    r.ln_q = 0.5 * std::log(c::pi) + 1.5 * std::log(T_K) - 0.5 * ln_theta_product - ln_sigma;
+    r.U_over_RT = r.H_over_RT = 1.5;
+    r.Cv_over_R = r.Cp_over_R = 1.5;
+  }
+  r.S_over_R = r.ln_q + r.U_over_RT;
+  return r;
+}
+
+double characteristic_temperature_K(double wavenumber_cm1) {
+  return wavenumber_cm1 * c::second_radiation_cm_K;
+}
+
+MotionTerms harmonic_oscillator_terms(double wavenumber_cm1, double T_K) {
+  MotionTerms v;
+  const double x = characteristic_temperature_K(wavenumber_cm1) / T_K;
+  // Past x ≈ 700, e^{-x} underflows: the mode is frozen and contributes nothing.
+  if (x > 700.0) return v;
+  const double em1 = std::expm1(x);        // eˣ − 1, accurate for small x
+  const double one_minus_e = -std::expm1(-x);  // 1 − e^{−x}
+  v.ln_q = -std::log(one_minus_e);
+  v.U_over_RT = v.H_over_RT = x / em1;
+  // x² eˣ/(eˣ−1)² written as (x/(eˣ−1))² · eˣ; for large x use x² e^{−x}/(1−e^{−x})².
+  v.Cv_over_R = v.Cp_over_R = x * x * std::exp(-x) / (one_minus_e * one_minus_e);
+  v.S_over_R = v.U_over_RT + v.ln_q;
+  return v;
+}
+
+MotionTerms electronic_terms(std::span<const ElectronicLevel> levels, double T_K) {
+  MotionTerms e;
+  if (levels.empty()) return e;
+  double lowest = levels[0].energy_cm1;
+  for (const auto& level : levels) lowest = std::min(lowest, level.energy_cm1);
+  // With y_i = (ε_i − ε_0)/kT and w_i = g_i e^{−y_i}: q = Σ w_i, U/RT = ⟨y⟩, Cv/R = ⟨y²⟩ − ⟨y⟩².
+  double q = 0.0, sum_y = 0.0, sum_y2 = 0.0;
+  for (const auto& level : levels) {
+    const double y = characteristic_temperature_K(level.energy_cm1 - lowest) / T_K;
+    const double w = level.degeneracy * std::exp(-y);
+    q += w;
+    sum_y += w * y;
+    sum_y2 += w * y * y;
+  }
+  const double mean_y = sum_y / q;
+  e.ln_q = std::log(q);
+  e.U_over_RT = e.H_over_RT = mean_y;
+  e.Cv_over_R = e.Cp_over_R = std::max(0.0, sum_y2 / q - mean_y * mean_y);
+  e.S_over_R = e.ln_q + e.U_over_RT;
+  return e;
+}
+
+}  // namespace vibtherm

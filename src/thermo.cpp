@@ -1,0 +1,170 @@
+#include "vibtherm/thermo.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <fmt/format.h>
+
+namespace vibtherm {
+
+namespace c = constants;
+
+namespace {
+
+std::string join_wavenumbers(const std::vector<double>& values) {
+  std::string out;
+  for (double v : values) out += (out.empty() ? "" : ", ") + fmt::format("{:.1f}i", std::abs(v));
+  return out;
+}
+
+std::string count_rule(const Species& species, RotorType type) {
+  if (species.phase == Phase::adsorbate) return "3N for an adsorbate";
+  switch (type) {
+    case RotorType::atom: return "none for an atom";
+    case RotorType::linear: return "3N-5 for a linear molecule";
+    case RotorType::nonlinear: return "3N-6 for a nonlinear molecule";
+  }
+  return "";
+}
+
+// Sorts out imaginary wavenumbers (negative input values) according to the options and
+// fills the wavenumbers used.
+void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scaled) {
+  const bool ts = p.options.transition_state || p.species.transition_state;
+  std::vector<double> imaginary;
+  for (double v : scaled)
+    if (v < 0.0) imaginary.push_back(v);
+  int drop_index = -1;
+  if (ts) {
+    if (imaginary.empty())
+      fail(p.species.origin, fmt::format("species '{}' is marked as a transition state but has no imaginary "
+                                         "frequency (expected one negative wavenumber)",
+                                         p.species.name));
+    // The reaction coordinate is the imaginary mode of largest magnitude.
+    auto it = std::min_element(scaled.begin(), scaled.end());
+    drop_index = static_cast<int>(it - scaled.begin());
+    p.notes.push_back(fmt::format("transition state: the imaginary mode {:.1f}i cm^-1 is the reaction "
+                                  "coordinate and is left out of the partition function",
+                                  std::abs(*it)));
+  }
+  std::vector<double> rejected;
+  for (size_t i = 0; i < scaled.size(); ++i) {
+    const double v = scaled[i];
+    p.used_frequencies_cm1.push_back(v);
+    if (static_cast<int>(i) == drop_index) continue;
+    if (v > 0.0) {
+      p.vibrations_cm1.push_back(v);
+    } else if (v < 0.0 && -v < p.options.imaginary_as_real_below_cm1) {
+      p.warnings.push_back(fmt::format("imaginary frequency {:.1f}i cm^-1 treated as a real mode of {:.1f} cm^-1",
+                                       -v, -v));
+      p.vibrations_cm1.push_back(-v);
+      p.used_frequencies_cm1.back() = -v;
+    } else if (v < 0.0) {
+      rejected.push_back(v);
+    } else {
+      fail(p.species.origin, fmt::format("species '{}' has a zero frequency (mode {}); expected only the "
+                                         "vibrations, without translations and rotations",
+                                         p.species.name, i + 1));
+    }
+  }
+  if (!rejected.empty())
+    fail(p.species.origin,
+         fmt::format("species '{}' has imaginary frequencies {} cm^-1; expected real ones (mark a transition "
+                     "state with 'transition_state: true', or treat small ones as real with "
+                     "--imaginary-as-real-below)",
+                     p.species.name, join_wavenumbers(rejected)));
+}
+
+}  // namespace
+
+PreparedSpecies prepare_species(const Species& species, const ModelOptions& options) {
+  PreparedSpecies p;
+  p.species = species;
+  p.options = options;
+  p.is_gas = species.phase == Phase::gas;
+  if (!(options.frequency_scale > 0.0) || !std::isfinite(options.frequency_scale))
+    fail({}, fmt::format("frequency scale factor must be positive, got {}", options.frequency_scale));
+  if (p.is_gas && !(options.pressure_Pa > 0.0 && std::isfinite(options.pressure_Pa)))
+    fail({}, fmt::format("pressure must be positive, got {} Pa", options.pressure_Pa));
+  if (species.symmetry_number < 1)
+    fail(species.origin, fmt::format("symmetry number must be a positive integer, got {}", species.symmetry_number));
+  p.rotor = analyse_rotor(species, options.linear_tolerance_amu_A2);
+
+  std::vector<double> scaled;
+  for (double v : species.frequencies_cm1) scaled.push_back(v * options.frequency_scale);
+  if (options.frequency_scale != 1.0)
+    p.notes.push_back(fmt::format("wavenumbers scaled by {}", options.frequency_scale));
+
+  const int expected = expected_vibration_count(species, p.rotor.type);
+  const int given = static_cast<int>(species.frequencies_cm1.size());
+  if (expected >= 0 && given != expected) {
+    const std::string message =
+        fmt::format("species '{}' has {} vibrational frequencies, expected {} ({}, N = {})", species.name, given,
+                    expected, count_rule(species, p.rotor.type), atom_count(species));
+    if (!options.mode_count_mismatch_is_warning) fail(species.origin, message + "; --allow-mode-count-mismatch accepts it");
+    p.warnings.push_back(message);
+  }
+  apply_imaginary_policy(p, scaled);
+
+  double sum_cm1 = 0.0;
+  for (double v : p.vibrations_cm1) sum_cm1 += v;
+  p.zero_point_energy_J_per_mol = 0.5 * sum_cm1 * c::wavenumber_J_per_mol;
+  if (!p.is_gas) p.notes.push_back("adsorbate: all 3N motions treated as harmonic vibrations");
+  return p;
+}
+
+namespace {
+
+// Thermal functions at T without the H(298.15) reference.
+ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
+  ThermoPoint point;
+  point.T_K = T_K;
+  if (p.is_gas) {
+    point.translation = p.options.standard_state == StandardState::molar
+                            ? translation_terms_concentration(p.rotor.mass_amu, T_K, 1000.0)
+                            : translation_terms(p.rotor.mass_amu, T_K, p.options.pressure_Pa);
+    point.rotation = rigid_rotor_terms(p.rotor.rotational_temperatures_K, p.species.symmetry_number, T_K);
+  }
+  for (double v : p.vibrations_cm1) point.vibration += harmonic_oscillator_terms(v, T_K);
+  point.electronic = electronic_terms(p.species.electronic_levels, T_K);
+
+  MotionTerms total = point.translation;
+  total += point.rotation;
+  total += point.vibration;
+  total += point.electronic;
+  const double R = c::gas_constant_J_per_mol_K;
+  point.Cv_J_per_mol_K = R * total.Cv_over_R;
+  point.Cp_J_per_mol_K = R * total.Cp_over_R;
+  point.S_J_per_mol_K = R * total.S_over_R;
+  point.H_minus_H0_J_per_mol = R * T_K * total.H_over_RT;
+  return point;
+}
+
+}  // namespace
+
+ThermoPoint evaluate(const PreparedSpecies& prepared, double T_K) {
+  if (!(T_K > 0.0) || !std::isfinite(T_K)) fail({}, fmt::format("temperature must be positive, got {} K", T_K));
+  ThermoPoint point = evaluate_terms(prepared, T_K);
+  const double h298_minus_h0 = evaluate_terms(prepared, c::reference_temperature_K).H_minus_H0_J_per_mol;
+  point.H_minus_H298_J_per_mol = point.H_minus_H0_J_per_mol - h298_minus_h0;
+  point.G_minus_H298_J_per_mol = point.H_minus_H298_J_per_mol - T_K * point.S_J_per_mol_K;
+  point.gibbs_function_J_per_mol_K = -point.G_minus_H298_J_per_mol / T_K;
+  return point;
+}
+
+std::vector<ThermoPoint> tabulate(const PreparedSpecies& prepared, const std::vector<double>& temperatures_K) {
+  std::vector<ThermoPoint> rows;
+  rows.reserve(temperatures_K.size());
+  for (double T : temperatures_K) rows.push_back(evaluate(prepared, T));
+  return rows;
+}
+
+double classical_Cv_over_R(const PreparedSpecies& prepared) {
+  const double vibrations = static_cast<double>(prepared.vibrations_cm1.size());
+  if (!prepared.is_gas) return vibrations;
+  double rotation = 0.0;
+  if (prepared.rotor.type == RotorType::linear) rotation = 1.0;
+  if (prepared.rotor.type == RotorType::nonlinear) rotation = 1.5;
+  return 1.5 + rotation + vibrations;
+}
+
+}  // namespace vibtherm
