@@ -182,14 +182,18 @@ class Parser {
   // Coefficients of one line: `expected` numbers, optionally followed by the line number.
   std::vector<double> coefficients(const Line& line, std::size_t expected, int line_number,
                                    const std::string& name) const {
-    const std::string text = strip_comment(line.text);
+    std::string text = strip_comment(line.text);
+    // The fixed-column line number (column 80) is not a coefficient.
+    if (text.size() >= 80 && std::isdigit(static_cast<unsigned char>(text[79])) && text[78] == ' ') text.resize(79);
     int stop = 0;
     auto nums = scan_numbers(text, 1, stop);
     if (stop != 0)
       fail_at(line, stop, fmt::format("species '{}': unreadable coefficient on line {} of its record "
                                       "(expected {} numbers in E15.8 fields)",
                                       name, line_number, expected));
-    if (nums.size() == expected + 1 && nums.back().integral && nums.back().value == line_number) nums.pop_back();
+    // A free-format line number: a bare integer equal to the line's place in the record
+    // (coefficients are always written with a point or an exponent).
+    if (!nums.empty() && nums.back().integral && nums.back().value == line_number) nums.pop_back();
     if (nums.size() != expected)
       fail_at(line, 1, fmt::format("species '{}': line {} of its record has {} numbers, expected {} coefficients",
                                    name, line_number, nums.size(), expected));
@@ -204,7 +208,8 @@ class Parser {
     const int w = sym_width + num_width;
     for (int k = 0; k < count; ++k) {
       const int c = first + k * w;
-      const auto sym = trim(column_text(s, c, c + sym_width - 1));
+      const std::string sym_column = column_text(s, c, c + sym_width - 1);
+      const auto sym = trim(sym_column);
       const auto num = to_number(column_text(s, c + sym_width, c + w - 1));
       if (sym.empty()) continue;
       if (!num || !std::isalpha(static_cast<unsigned char>(sym.front()))) return {};  // not fixed-column
@@ -230,7 +235,10 @@ class Parser {
     if (text.size() >= 55 && std::isalpha(static_cast<unsigned char>(text[44]))) {
       const auto a = to_number(column_text(text, 46, 55));
       const auto b = to_number(column_text(text, 56, 65));
-      const auto mid_text = trim(column_text(text, 66, 73));
+      // The pinned layout puts T_mid in columns 66-73; circulated files often write it as
+      // F10.3 reaching column 75, so everything up to column 79 is read.
+      const std::string mid_column = column_text(text, 66, 79);
+      const auto mid_text = trim(mid_column);
       const auto c = to_number(mid_text);
       if (a && b && (mid_text.empty() || c)) {
         fixed = true;

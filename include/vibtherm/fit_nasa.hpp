@@ -61,6 +61,8 @@ struct FitSample {
 // Physical bounds of Cp/R (common practice, from equipartition): lower = translation +
 // rotation (5/2 atom, 7/2 linear, 4 nonlinear; 0 adsorbate); upper = classical limit
 // (3N − 3/2 linear, 3N − 2 nonlinear, 3N adsorbate) plus the electronic Cp of each sample.
+// Every grid stretch outside them is listed; a warning is raised when the departure is
+// larger than the Cp threshold times the bound (smaller ones are the fit error near an asymptote).
 struct CpBounds {
   double lower_over_R = 0.0;
   double upper_over_R = 0.0;
