@@ -71,4 +71,18 @@ double polynomial_T_max_K(const NasaPolynomial& p) {
   return std::get<Nasa9>(p).T_max_K();
 }
 
+ThermoPoint polynomial_table_row(const NasaPolynomial& p, double T_K) {
+  const NasaProperties at = polynomial_at(p, T_K);
+  const double H298 = polynomial_at(p, constants::reference_temperature_K).H_J_per_mol();
+  ThermoPoint row;
+  row.T_K = T_K;
+  row.Cp_J_per_mol_K = at.Cp_J_per_mol_K();
+  row.S_J_per_mol_K = at.S_J_per_mol_K();
+  row.H_minus_H298_J_per_mol = at.H_J_per_mol() - H298;
+  // G = H − TS (common practice).
+  row.G_minus_H298_J_per_mol = row.H_minus_H298_J_per_mol - T_K * row.S_J_per_mol_K;
+  row.gibbs_function_J_per_mol_K = -row.G_minus_H298_J_per_mol / T_K;
+  return row;
+}
+
 }  // namespace vibtherm

