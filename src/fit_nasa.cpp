@@ -266,8 +266,8 @@ double parse_number(std::string_view text, std::string_view whole) {
   const char* end = text.data() + text.size();
   auto [ptr, ec] = std::from_chars(text.data(), end, value);
   if (ec != std::errc() || ptr != end || !std::isfinite(value))
-    fail({}, fmt::format("--range '{}': '{}' is not a temperature in K (expected e.g. 200:1000:3000)",
-                         whole, text));
+    fail({}, fmt::format("--range '{}': '{}' is not a temperature in K (expected e.g. 200:1000:3000)", whole,
+                         text));
   return value;
 }
 
@@ -351,17 +351,18 @@ FitResult fit_samples(const FitInput& input, const FitOptions& options) {
   const FitThresholds& th = options.thresholds;
   for (const auto& e : result.errors) {
     if (e.max_Cp_relative > th.Cp_relative)
-      result.warnings.push_back(fmt::format("{}: {} fit {:g}-{:g} K: max Cp error {:.3f} % at {:g} K exceeds {:g} %",
-                                            input.name, form_name(options.form), e.T_low_K, e.T_high_K,
-                                            100 * e.max_Cp_relative, e.T_at_max_Cp_K, 100 * th.Cp_relative));
+      result.warnings.push_back(
+          fmt::format("{}: {} fit {:g}-{:g} K: max Cp error {:.3f} % at {:g} K exceeds {:g} %", input.name,
+                      form_name(options.form), e.T_low_K, e.T_high_K, 100 * e.max_Cp_relative,
+                      e.T_at_max_Cp_K, 100 * th.Cp_relative));
     if (e.max_H_J_per_mol > th.H_J_per_mol)
-      result.warnings.push_back(fmt::format("{}: {} fit {:g}-{:g} K: max H error {:.3f} kJ/mol exceeds {:g} kJ/mol",
-                                            input.name, form_name(options.form), e.T_low_K, e.T_high_K,
-                                            e.max_H_J_per_mol / 1000, th.H_J_per_mol / 1000));
+      result.warnings.push_back(fmt::format(
+          "{}: {} fit {:g}-{:g} K: max H error {:.3f} kJ/mol exceeds {:g} kJ/mol", input.name,
+          form_name(options.form), e.T_low_K, e.T_high_K, e.max_H_J_per_mol / 1000, th.H_J_per_mol / 1000));
     if (e.max_S_J_per_mol_K > th.S_J_per_mol_K)
-      result.warnings.push_back(fmt::format("{}: {} fit {:g}-{:g} K: max S error {:.3f} J/(mol K) exceeds {:g}",
-                                            input.name, form_name(options.form), e.T_low_K, e.T_high_K,
-                                            e.max_S_J_per_mol_K, th.S_J_per_mol_K));
+      result.warnings.push_back(
+          fmt::format("{}: {} fit {:g}-{:g} K: max S error {:.3f} J/(mol K) exceeds {:g}", input.name,
+                      form_name(options.form), e.T_low_K, e.T_high_K, e.max_S_J_per_mol_K, th.S_J_per_mol_K));
   }
   // Every excursion is listed; one within the Cp threshold of its bound is the fit's own
   // error near an asymptote (Cp → 4R at low T) rather than ringing, so only larger ones warn.
@@ -401,7 +402,8 @@ double species_molar_mass_g_per_mol(const Species& species) {
   double total = 0.0;
   auto weight = [&](const std::string& symbol) {
     const auto info = find_element(symbol);
-    if (!info) fail(species.origin, fmt::format("unknown element '{}' in species '{}'", symbol, species.name));
+    if (!info)
+      fail(species.origin, fmt::format("unknown element '{}' in species '{}'", symbol, species.name));
     return info->standard_atomic_weight;
   };
   if (!species.atoms.empty()) {

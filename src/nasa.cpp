@@ -47,9 +47,7 @@ NasaProperties Nasa9::at(double T_K) const {
   return nasa9_properties(ranges.back(), T_K);
 }
 
-bool Nasa9::in_range(double T_K) const {
-  return !ranges.empty() && T_K >= T_min_K() && T_K <= T_max_K();
-}
+bool Nasa9::in_range(double T_K) const { return !ranges.empty() && T_K >= T_min_K() && T_K <= T_max_K(); }
 double Nasa9::T_min_K() const { return ranges.empty() ? 0.0 : ranges.front().T_low_K; }
 double Nasa9::T_max_K() const { return ranges.empty() ? 0.0 : ranges.back().T_high_K; }
 

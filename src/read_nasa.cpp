@@ -23,8 +23,8 @@ struct Line {
 
 struct Number {
   double value = 0.0;
-  int column = 0;           // 1-based column of its first character
-  bool integral = false;    // written without '.', exponent or sign-less digits only
+  int column = 0;         // 1-based column of its first character
+  bool integral = false;  // written without '.', exponent or sign-less digits only
 };
 
 std::string_view trim(std::string_view s) {
@@ -119,8 +119,10 @@ class Parser {
         break;
       }
       std::size_t j = i + 1;
-      if (!next_content(j)) fail_at(line, 1, "species record '" + first_token(line.text) +
-                                                 "' ends after its first line (expected its coefficient lines)");
+      if (!next_content(j))
+        fail_at(line, 1,
+                "species record '" + first_token(line.text) +
+                    "' ends after its first line (expected its coefficient lines)");
       if (is_nasa9_second_record(lines_[j].text))
         out.emplace_back(read_nasa9(i));
       else
@@ -175,8 +177,9 @@ class Parser {
   static bool is_nasa9_second_record(const std::string& s) {
     const auto t = trim(s);
     const auto token = t.substr(0, t.find(' '));
-    return !token.empty() && token.size() <= 2 &&
-           std::all_of(token.begin(), token.end(), [](char c) { return std::isdigit(static_cast<unsigned char>(c)); });
+    return !token.empty() && token.size() <= 2 && std::all_of(token.begin(), token.end(), [](char c) {
+      return std::isdigit(static_cast<unsigned char>(c));
+    });
   }
 
   // Coefficients of one line: `expected` numbers, optionally followed by the line number.
@@ -184,26 +187,29 @@ class Parser {
                                    const std::string& name) const {
     std::string text = strip_comment(line.text);
     // The fixed-column line number (column 80) is not a coefficient.
-    if (text.size() >= 80 && std::isdigit(static_cast<unsigned char>(text[79])) && text[78] == ' ') text.resize(79);
+    if (text.size() >= 80 && std::isdigit(static_cast<unsigned char>(text[79])) && text[78] == ' ')
+      text.resize(79);
     int stop = 0;
     auto nums = scan_numbers(text, 1, stop);
     if (stop != 0)
-      fail_at(line, stop, fmt::format("species '{}': unreadable coefficient on line {} of its record "
-                                      "(expected {} numbers in E15.8 fields)",
-                                      name, line_number, expected));
+      fail_at(line, stop,
+              fmt::format("species '{}': unreadable coefficient on line {} of its record "
+                          "(expected {} numbers in E15.8 fields)",
+                          name, line_number, expected));
     // A free-format line number: a bare integer equal to the line's place in the record
     // (coefficients are always written with a point or an exponent).
     if (!nums.empty() && nums.back().integral && nums.back().value == line_number) nums.pop_back();
     if (nums.size() != expected)
-      fail_at(line, 1, fmt::format("species '{}': line {} of its record has {} numbers, expected {} coefficients",
-                                   name, line_number, nums.size(), expected));
+      fail_at(line, 1,
+              fmt::format("species '{}': line {} of its record has {} numbers, expected {} coefficients",
+                          name, line_number, nums.size(), expected));
     std::vector<double> out;
     for (const auto& n : nums) out.push_back(n.value);
     return out;
   }
 
-  static std::vector<ElementAmount> composition_fields(const std::string& s, int first, int count, int sym_width,
-                                                       int num_width) {
+  static std::vector<ElementAmount> composition_fields(const std::string& s, int first, int count,
+                                                       int sym_width, int num_width) {
     std::vector<ElementAmount> out;
     const int w = sym_width + num_width;
     for (int k = 0; k < count; ++k) {
@@ -258,24 +264,27 @@ class Parser {
                                  std::isdigit(static_cast<unsigned char>(text[k - 1]));
         const char next = k + 1 < text.size() ? text[k + 1] : ' ';
         if (token_start && (c == 'G' || c == 'L' || c == 'S' || c == 'C') &&
-            (std::isspace(static_cast<unsigned char>(next)) || std::isdigit(static_cast<unsigned char>(next))))
+            (std::isspace(static_cast<unsigned char>(next)) ||
+             std::isdigit(static_cast<unsigned char>(next))))
           pos = k;
       }
       if (pos == std::string::npos)
-        fail_at(l1, 45,
-                fmt::format("species '{}': expected the phase (G, L or S) in column 45 followed by T_low, T_high "
-                            "and T_mid",
-                            sp.name));
+        fail_at(
+            l1, 45,
+            fmt::format("species '{}': expected the phase (G, L or S) in column 45 followed by T_low, T_high "
+                        "and T_mid",
+                        sp.name));
       sp.phase = static_cast<char>(std::toupper(static_cast<unsigned char>(text[pos])));
       int stop = 0;
       auto nums = scan_numbers(std::string_view(text).substr(pos + 1), static_cast<int>(pos) + 2, stop);
       if (stop != 0)
-        fail_at(l1, stop, fmt::format("species '{}': unreadable temperature after the phase letter", sp.name));
+        fail_at(l1, stop,
+                fmt::format("species '{}': unreadable temperature after the phase letter", sp.name));
       if (nums.size() >= 3 && nums.back().integral && nums.back().value == 1.0) nums.pop_back();
       if (nums.size() < 2 || nums.size() > 3)
         fail_at(l1, static_cast<int>(pos) + 2,
-                fmt::format("species '{}': expected T_low T_high [T_mid] after the phase, found {} numbers", sp.name,
-                            nums.size()));
+                fmt::format("species '{}': expected T_low T_high [T_mid] after the phase, found {} numbers",
+                            sp.name, nums.size()));
       lo = nums[0].value;
       hi = nums[1].value;
       if (nums.size() == 3) mid = nums[2].value;
@@ -284,9 +293,10 @@ class Parser {
     sp.T_high_K = *hi;
     sp.T_mid_K = mid ? *mid : default_T_mid_K_.value_or(default_nasa7_T_mid_K);
     if (!(sp.T_low_K > 0 && sp.T_low_K <= sp.T_mid_K && sp.T_mid_K <= sp.T_high_K))
-      fail_at(l1, 46, fmt::format("species '{}': temperatures T_low {:g}, T_mid {:g}, T_high {:g} K are not "
-                                  "positive and ascending",
-                                  sp.name, sp.T_low_K, sp.T_mid_K, sp.T_high_K));
+      fail_at(l1, 46,
+              fmt::format("species '{}': temperatures T_low {:g}, T_mid {:g}, T_high {:g} K are not "
+                          "positive and ascending",
+                          sp.name, sp.T_low_K, sp.T_mid_K, sp.T_high_K));
 
     std::vector<double> c;
     const std::size_t expected[] = {5, 5, 4};
@@ -294,7 +304,8 @@ class Parser {
       ++i;
       if (!next_content(i))
         fail_at(lines_.back(), 0,
-                fmt::format("species '{}': file ends inside its NASA-7 record (expected line {})", sp.name, k + 2));
+                fmt::format("species '{}': file ends inside its NASA-7 record (expected line {})", sp.name,
+                            k + 2));
       const auto v = coefficients(lines_[i], expected[k], k + 2, sp.name);
       c.insert(c.end(), v.begin(), v.end());
     }
@@ -312,20 +323,22 @@ class Parser {
     ++i;
     next_content(i);
     const Line& r2 = lines_[i];
-    const int nranges = static_cast<int>(to_number(column_text(r2.text, 1, 2)).value_or(
-        to_number(first_token(r2.text)).value_or(0)));
+    const int nranges = static_cast<int>(
+        to_number(column_text(r2.text, 1, 2)).value_or(to_number(first_token(r2.text)).value_or(0)));
     if (nranges < 1 || nranges > 9)
-      fail_at(r2, 1, fmt::format("species '{}': expected the number of temperature intervals (1-9) in columns 1-2",
-                                 sp.name));
+      fail_at(r2, 1,
+              fmt::format("species '{}': expected the number of temperature intervals (1-9) in columns 1-2",
+                          sp.name));
     sp.date_code = std::string(trim(column_text(r2.text, 4, 9)));
     sp.composition = composition_fields(r2.text, 11, 5, 2, 6);
     const auto phase = to_number(column_text(r2.text, 51, 52));
     const auto mw = to_number(column_text(r2.text, 53, 65));
     const auto hf = to_number(column_text(r2.text, 66, 80));
     if (!phase || !mw || !hf)
-      fail_at(r2, 51, fmt::format("species '{}': expected phase (cols 51-52), molecular weight (53-65) and "
-                                  "enthalpy of formation (66-80)",
-                                  sp.name));
+      fail_at(r2, 51,
+              fmt::format("species '{}': expected phase (cols 51-52), molecular weight (53-65) and "
+                          "enthalpy of formation (66-80)",
+                          sp.name));
     sp.phase = static_cast<int>(*phase);
     sp.molar_mass_g_per_mol = *mw;
     sp.enthalpy_of_formation_J_per_mol = *hf;
@@ -333,23 +346,24 @@ class Parser {
       ++i;
       if (!next_content(i))
         fail_at(lines_.back(), 0,
-                fmt::format("species '{}': file ends inside its NASA-9 record (interval {} of {})", sp.name, r + 1,
-                            nranges));
+                fmt::format("species '{}': file ends inside its NASA-9 record (interval {} of {})", sp.name,
+                            r + 1, nranges));
       const Line& tl = lines_[i];
       int stop = 0;
       const auto nums = scan_numbers(strip_comment(tl.text), 1, stop);
       if (stop != 0 || nums.size() < 10)
-        fail_at(tl, stop ? stop : 1,
-                fmt::format("species '{}': expected T_low, T_high, the coefficient count and the T exponents of "
-                            "interval {}",
-                            sp.name, r + 1));
+        fail_at(
+            tl, stop ? stop : 1,
+            fmt::format("species '{}': expected T_low, T_high, the coefficient count and the T exponents of "
+                        "interval {}",
+                        sp.name, r + 1));
       Nasa9Range range;
       range.T_low_K = nums[0].value;
       range.T_high_K = nums[1].value;
       if (nums[2].value != 7)
         fail_at(tl, nums[2].column,
-                fmt::format("species '{}': interval {} has {} coefficients; only 7 are supported", sp.name, r + 1,
-                            nums[2].value));
+                fmt::format("species '{}': interval {} has {} coefficients; only 7 are supported", sp.name,
+                            r + 1, nums[2].value));
       for (int k = 0; k < 7; ++k)
         if (nums[3 + k].value != k - 2)
           fail_at(tl, nums[3 + k].column,
@@ -361,16 +375,19 @@ class Parser {
         sp.H298_minus_H0_J_per_mol = h ? *h : nums.back().value;
       }
       ++i;
-      if (!next_content(i)) fail_at(lines_.back(), 0, fmt::format("species '{}': file ends inside its record", sp.name));
+      if (!next_content(i))
+        fail_at(lines_.back(), 0, fmt::format("species '{}': file ends inside its record", sp.name));
       const auto a = coefficients(lines_[i], 5, 0, sp.name);
       ++i;
-      if (!next_content(i)) fail_at(lines_.back(), 0, fmt::format("species '{}': file ends inside its record", sp.name));
+      if (!next_content(i))
+        fail_at(lines_.back(), 0, fmt::format("species '{}': file ends inside its record", sp.name));
       const Line& bl = lines_[i];
       auto b = scan_numbers(strip_comment(bl.text), 1, stop);
       if (stop != 0 || (b.size() != 4 && b.size() != 5))
-        fail_at(bl, stop ? stop : 1,
-                fmt::format("species '{}': interval {}: expected a6, a7, b1, b2 (D16.9, columns 1-32 and 49-80)",
-                            sp.name, r + 1));
+        fail_at(
+            bl, stop ? stop : 1,
+            fmt::format("species '{}': interval {}: expected a6, a7, b1, b2 (D16.9, columns 1-32 and 49-80)",
+                        sp.name, r + 1));
       if (b.size() == 5) b.erase(b.begin() + 2);  // the unused field written as a number
       std::copy(a.begin(), a.end(), range.a.begin());
       range.a[5] = b[0].value;
@@ -379,8 +396,9 @@ class Parser {
       range.b2 = b[3].value;
       if (!(range.T_low_K > 0 && range.T_high_K > range.T_low_K) ||
           (!sp.ranges.empty() && std::abs(range.T_low_K - sp.ranges.back().T_high_K) > 1e-6))
-        fail_at(tl, 1, fmt::format("species '{}': interval {} ({:g}-{:g} K) is not ascending and contiguous",
-                                   sp.name, r + 1, range.T_low_K, range.T_high_K));
+        fail_at(tl, 1,
+                fmt::format("species '{}': interval {} ({:g}-{:g} K) is not ascending and contiguous",
+                            sp.name, r + 1, range.T_low_K, range.T_high_K));
       sp.ranges.push_back(range);
     }
     ++i;

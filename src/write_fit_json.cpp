@@ -31,8 +31,8 @@ ordered_json species_json(const FitRecord& rec) {
   ordered_json s;
   s["name"] = fit.name;
   ordered_json composition = ordered_json::object();
-  const auto& comp = std::visit([](const auto& p) -> const std::vector<ElementAmount>& { return p.composition; },
-                                sf.polynomial);
+  const auto& comp = std::visit(
+      [](const auto& p) -> const std::vector<ElementAmount>& { return p.composition; }, sf.polynomial);
   for (const auto& e : comp) composition[e.symbol] = e.count;
   s["composition"] = composition;
   if (const auto* n7 = std::get_if<Nasa7>(&sf.polynomial))
@@ -100,11 +100,13 @@ std::string write_fit_json(const std::vector<FitRecord>& records, const FitOptio
                          {"Cp_slope_continuous", options.Cp_slope_continuous},
                          {"grid_step_K", options.grid_step_K},
                          {"objective", "sum of squared relative Cp errors on the grid"},
-                         {"constraints", "Cp, H, S continuous at joints; H(298.15 K) = enthalpy of formation; "
-                                         "S(298.15 K) = computed entropy"},
-                         {"thresholds", {{"Cp_relative", options.thresholds.Cp_relative},
-                                         {"H_J_per_mol", options.thresholds.H_J_per_mol},
-                                         {"S_J_per_mol_K", options.thresholds.S_J_per_mol_K}}}};
+                         {"constraints",
+                          "Cp, H, S continuous at joints; H(298.15 K) = enthalpy of formation; "
+                          "S(298.15 K) = computed entropy"},
+                         {"thresholds",
+                          {{"Cp_relative", options.thresholds.Cp_relative},
+                           {"H_J_per_mol", options.thresholds.H_J_per_mol},
+                           {"S_J_per_mol_K", options.thresholds.S_J_per_mol_K}}}};
   ordered_json species = ordered_json::array();
   for (const auto& r : records) species.push_back(species_json(r));
   root["species"] = species;

@@ -39,7 +39,8 @@ void check_name(const Nasa7& sp) {
   if (sp.name.find_first_of(" \t") != std::string::npos)
     fail({}, fmt::format("species '{}': NASA-7 names cannot contain blanks", sp.name));
   if (sp.note.size() > 6)
-    fail({}, fmt::format("species '{}': note '{}' is longer than 6 characters (columns 19-24)", sp.name, sp.note));
+    fail({}, fmt::format("species '{}': note '{}' is longer than 6 characters (columns 19-24)", sp.name,
+                         sp.note));
 }
 
 std::string element_fields(const Nasa7& sp) {
@@ -52,8 +53,8 @@ std::string element_fields(const Nasa7& sp) {
     if (e.symbol.empty() || e.symbol.size() > 2)
       fail({}, fmt::format("species '{}': element symbol '{}' does not fit 2 columns", sp.name, e.symbol));
     if (e.count != std::round(e.count) || e.count < 0 || e.count > 999)
-      fail({}, fmt::format("species '{}': element count {} of {} is not a whole number 0-999", sp.name, e.count,
-                           e.symbol));
+      fail({}, fmt::format("species '{}': element count {} of {} is not a whole number 0-999", sp.name,
+                           e.count, e.symbol));
     out += fmt::format("{:<2}{:>3}", e.symbol, static_cast<int>(e.count));
   }
   out.resize(20, ' ');
@@ -73,11 +74,11 @@ std::string write_nasa7_record(const Nasa7& sp) {
   std::string out;
   for (const auto& c : sp.comments) out += "! " + c + '\n';
   std::string l1 = fmt::format("{:<18}{:<6}", sp.name, sp.note);  // cols 1-24
-  l1 += element_fields(sp);                                        // cols 25-44
-  l1 += sp.phase;                                                  // col 45
-  l1 += temperature_field(sp.T_low_K, 10, sp.name);                // cols 46-55
-  l1 += temperature_field(sp.T_high_K, 10, sp.name);               // cols 56-65
-  l1 += temperature_field(sp.T_mid_K, 8, sp.name);                 // cols 66-73
+  l1 += element_fields(sp);                                       // cols 25-44
+  l1 += sp.phase;                                                 // col 45
+  l1 += temperature_field(sp.T_low_K, 10, sp.name);               // cols 46-55
+  l1 += temperature_field(sp.T_high_K, 10, sp.name);              // cols 56-65
+  l1 += temperature_field(sp.T_mid_K, 8, sp.name);                // cols 66-73
   out += numbered(l1, '1');
   const auto& h = sp.high;
   const auto& l = sp.low;
@@ -87,7 +88,8 @@ std::string write_nasa7_record(const Nasa7& sp) {
   out += numbered(e15_8(h[5], sp.name) + e15_8(h[6], sp.name) + e15_8(l[0], sp.name) + e15_8(l[1], sp.name) +
                       e15_8(l[2], sp.name),
                   '3');
-  out += numbered(e15_8(l[3], sp.name) + e15_8(l[4], sp.name) + e15_8(l[5], sp.name) + e15_8(l[6], sp.name), '4');
+  out += numbered(e15_8(l[3], sp.name) + e15_8(l[4], sp.name) + e15_8(l[5], sp.name) + e15_8(l[6], sp.name),
+                  '4');
   return out;
 }
 
@@ -108,8 +110,8 @@ std::string write_nasa7(const std::vector<Nasa7>& species, const Nasa7WriteOptio
       }
       int best = 0;
       for (const auto& s : species) {
-        const int n = static_cast<int>(
-            std::count_if(species.begin(), species.end(), [&](const Nasa7& o) { return o.T_mid_K == s.T_mid_K; }));
+        const int n = static_cast<int>(std::count_if(species.begin(), species.end(),
+                                                     [&](const Nasa7& o) { return o.T_mid_K == s.T_mid_K; }));
         if (n > best) {
           best = n;
           mid = s.T_mid_K;

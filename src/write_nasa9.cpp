@@ -15,8 +15,8 @@ namespace {
 // A fixed-width field; anything wider than `width` is an error, not a truncation.
 std::string field(const std::string& text, std::size_t width, const std::string& name, const char* what) {
   if (text.size() > width)
-    fail({}, fmt::format("species '{}': {} '{}' does not fit {} columns of the NASA-9 record", name, what, text,
-                         width));
+    fail({}, fmt::format("species '{}': {} '{}' does not fit {} columns of the NASA-9 record", name, what,
+                         text, width));
   return text;
 }
 
@@ -48,7 +48,8 @@ std::string write_nasa9_record(const Nasa9& sp) {
     fail({}, fmt::format("species '{}' has {} elements; the NASA-9 record holds five: use --form json", name,
                          sp.composition.size()));
   if (sp.ranges.empty() || sp.ranges.size() > 9)
-    fail({}, fmt::format("species '{}': NASA-9 needs 1 to 9 temperature ranges, has {}", name, sp.ranges.size()));
+    fail({},
+         fmt::format("species '{}': NASA-9 needs 1 to 9 temperature ranges, has {}", name, sp.ranges.size()));
 
   // Record 1: name (1-18), comment (19-80).
   std::string out = pad(name, 18) + field(sp.comment, 62, name, "comment");

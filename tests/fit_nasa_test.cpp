@@ -60,9 +60,11 @@ void check_joints(const std::vector<Nasa9Range>& ranges, bool slope) {
     CHECK(rel(a.S_over_R, b.S_over_R) < 1e-9);
     if (slope) {
       const double h = 1e-3;
-      const double da = (nasa9_properties(ranges[r], T).Cp_over_R - nasa9_properties(ranges[r], T - h).Cp_over_R) / h;
+      const double da =
+          (nasa9_properties(ranges[r], T).Cp_over_R - nasa9_properties(ranges[r], T - h).Cp_over_R) / h;
       const double db =
-          (nasa9_properties(ranges[r + 1], T + h).Cp_over_R - nasa9_properties(ranges[r + 1], T).Cp_over_R) / h;
+          (nasa9_properties(ranges[r + 1], T + h).Cp_over_R - nasa9_properties(ranges[r + 1], T).Cp_over_R) /
+          h;
       CHECK(std::abs(da - db) < 1e-5);
     }
   }
@@ -76,12 +78,15 @@ TEST_CASE("range text") {
   CHECK(r.auto_index == 1);
   CHECK(parse_fit_range("200:1000:3000:6000", NasaForm::nasa9).breakpoints_K[2] == 3000.0);
   CHECK_THROWS_WITH_AS(parse_fit_range("200:1000", NasaForm::nasa7),
-                       "error: --range '200:1000': NASA-7 needs TLOW:TMID:THIGH (3 values), got 2", InputError);
-  CHECK_THROWS_WITH_AS(parse_fit_range("200:100:3000", NasaForm::nasa7),
-                       "error: --range '200:100:3000': temperatures must be positive and ascending", InputError);
-  CHECK_THROWS_WITH_AS(parse_fit_range("200:1e3x:3000", NasaForm::nasa7),
-                       "error: --range '200:1e3x:3000': '1e3x' is not a temperature in K (expected e.g. 200:1000:3000)",
+                       "error: --range '200:1000': NASA-7 needs TLOW:TMID:THIGH (3 values), got 2",
                        InputError);
+  CHECK_THROWS_WITH_AS(parse_fit_range("200:100:3000", NasaForm::nasa7),
+                       "error: --range '200:100:3000': temperatures must be positive and ascending",
+                       InputError);
+  CHECK_THROWS_WITH_AS(
+      parse_fit_range("200:1e3x:3000", NasaForm::nasa7),
+      "error: --range '200:1e3x:3000': '1e3x' is not a temperature in K (expected e.g. 200:1000:3000)",
+      InputError);
   CHECK_THROWS_AS(parse_fit_range("auto:1000:3000", NasaForm::nasa7), InputError);
   CHECK_THROWS_AS(parse_fit_range("200:auto:auto:6000", NasaForm::nasa9), InputError);
 }
@@ -168,8 +173,10 @@ TEST_CASE("missing enthalpy of formation") {
   s.origin.file = "water.yaml";
   const auto p = prepare_species(s);
   CHECK_THROWS_WITH_AS(fit_species(p, FitOptions{}),
-                       doctest::Contains("water.yaml: error: species 'H2O' has no enthalpy of formation"), InputError);
-  CHECK_THROWS_WITH_AS(fit_species(p, FitOptions{}), doctest::Contains("`enthalpy_of_formation: VALUE`"), InputError);
+                       doctest::Contains("water.yaml: error: species 'H2O' has no enthalpy of formation"),
+                       InputError);
+  CHECK_THROWS_WITH_AS(fit_species(p, FitOptions{}), doctest::Contains("`enthalpy_of_formation: VALUE`"),
+                       InputError);
   FitOptions allow;
   allow.allow_missing_hf = true;
   const auto fit = fit_species(p, allow);
@@ -255,7 +262,8 @@ TEST_CASE("composition and molar mass") {
   CHECK(comp[1].symbol == "O");
   CHECK(comp[1].count == 2.0);
   // Standard atomic weights C 12.011, O 15.999 (IUPAC/CIAAW conventional values, common practice).
-  CHECK(species_molar_mass_g_per_mol(test::carbon_dioxide()) == doctest::Approx(12.011 + 2 * 15.999).epsilon(1e-6));
+  CHECK(species_molar_mass_g_per_mol(test::carbon_dioxide()) ==
+        doctest::Approx(12.011 + 2 * 15.999).epsilon(1e-6));
   Species d2o = test::water();
   for (auto& a : d2o.atoms)
     if (a.symbol == "H") {

@@ -32,7 +32,8 @@ void check_o2(const NasaPolynomial& p, double T_mid) {
 
 TEST_CASE("fixed columns, with and without the wrapper") {
   check_o2(read_nasa(o2_fixed, "a").at(0), 1000.0);
-  const auto w = read_nasa("THERMO ALL\n   300.000  1000.000  5000.000\n" + o2_fixed + "END\nREACTIONS\n", "b");
+  const auto w =
+      read_nasa("THERMO ALL\n   300.000  1000.000  5000.000\n" + o2_fixed + "END\nREACTIONS\n", "b");
   REQUIRE(w.size() == 1);
   check_o2(w[0], 1000.0);
 }
@@ -59,7 +60,8 @@ TEST_CASE("tolerated variations") {
     std::string line1 = o2_fixed.substr(0, 81);
     line1.replace(65, 10, std::string(10, ' '));
     const std::string rest = o2_fixed.substr(81);
-    check_o2(read_nasa("THERMO\n   300.000  1400.000  5000.000\n" + line1 + rest + "END\n", "d").at(0), 1400.0);
+    check_o2(read_nasa("THERMO\n   300.000  1400.000  5000.000\n" + line1 + rest + "END\n", "d").at(0),
+             1400.0);
     check_o2(read_nasa(line1 + rest, "e").at(0), default_nasa7_T_mid_K);
   }
   SUBCASE("CRLF line ends and tabs") {
@@ -83,21 +85,25 @@ TEST_CASE("malformed blocks name their line") {
   };
   std::string garbled = o2_fixed;
   garbled.replace(81 + 16, 14, "1.4830875xE-03");
-  CHECK(error_of(garbled) ==
-        "bad.dat:2:26: error: species 'O2': unreadable coefficient on line 2 of its record (expected 5 numbers "
-        "in E15.8 fields)");
+  CHECK(
+      error_of(garbled) ==
+      "bad.dat:2:26: error: species 'O2': unreadable coefficient on line 2 of its record (expected 5 numbers "
+      "in E15.8 fields)");
   CHECK(error_of(o2_fixed.substr(0, 3 * 81)) ==
         "bad.dat:3: error: species 'O2': file ends inside its NASA-7 record (expected line 4)");
   std::string short_line = o2_fixed;
   short_line.replace(2 * 81 + 60, 15, std::string(15, ' '));
-  CHECK(error_of(short_line) == "bad.dat:3:1: error: species 'O2': line 3 of its record has 4 numbers, expected 5 "
-                                "coefficients");
+  CHECK(error_of(short_line) ==
+        "bad.dat:3:1: error: species 'O2': line 3 of its record has 4 numbers, expected 5 "
+        "coefficients");
   std::string bad_t = o2_fixed;
   bad_t.replace(55, 10, "   100.000");
-  CHECK(error_of(bad_t) == "bad.dat:1:46: error: species 'O2': temperatures T_low 200, T_mid 1000, T_high 100 K are "
-                           "not positive and ascending");
+  CHECK(error_of(bad_t) ==
+        "bad.dat:1:46: error: species 'O2': temperatures T_low 200, T_mid 1000, T_high 100 K are "
+        "not positive and ascending");
   CHECK(error_of("O2 something without a phase\n 1.0E+00 2.0E+00\n") ==
-        "bad.dat:1:45: error: species 'O2': expected the phase (G, L or S) in column 45 followed by T_low, T_high and "
+        "bad.dat:1:45: error: species 'O2': expected the phase (G, L or S) in column 45 followed by T_low, "
+        "T_high and "
         "T_mid");
   CHECK(error_of("! only a comment\n") == "bad.dat: error: no NASA-7 or NASA-9 species records found");
   CHECK(error_of("O2   G 300 5000 1000\n") ==
@@ -114,6 +120,7 @@ TEST_CASE("NASA-9 malformed interval") {
     FAIL("expected an error");
   } catch (const InputError& e) {
     CHECK(std::string(e.what()) ==
-          "n9.dat:3:56: error: species 'CH4': interval 1: T exponents must be -2 -1 0 1 2 3 4, found 5 at position 7");
+          "n9.dat:3:56: error: species 'CH4': interval 1: T exponents must be -2 -1 0 1 2 3 4, found 5 at "
+          "position 7");
   }
 }

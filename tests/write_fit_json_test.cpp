@@ -12,7 +12,8 @@ TEST_CASE("JSON form carries coefficients, errors and provenance") {
   FitOptions opt;
   opt.form = NasaForm::nasa9;
   opt.range = default_fit_range(NasaForm::nasa9);
-  FitRecord rec{fit_species(prepare_species(test::water()), opt), {"water.yaml", "abc123", {{"frequency_scale", "1"}}}};
+  FitRecord rec{fit_species(prepare_species(test::water()), opt),
+                {"water.yaml", "abc123", {{"frequency_scale", "1"}}}};
   const auto j = nlohmann::json::parse(write_fit_json({rec}, opt));
   CHECK(j["tool"]["version"] == VIBTHERM_VERSION);
   CHECK(j["fit_options"]["form"] == "nasa9");

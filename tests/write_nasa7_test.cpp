@@ -28,10 +28,10 @@ Nasa7 o2_record() {
   n.T_low_K = 200.0;
   n.T_mid_K = 1000.0;
   n.T_high_K = 3500.0;
-  n.high = {3.28253784E+00, 1.48308754E-03, -7.57966669E-07, 2.09470555E-10, -2.16717794E-14, -1.08845772E+03,
-            5.45323129E+00};
-  n.low = {3.78245636E+00, -2.99673416E-03, 9.84730201E-06, -9.68129509E-09, 3.24372837E-12, -1.06394356E+03,
-           3.65767573E+00};
+  n.high = {3.28253784E+00,  1.48308754E-03,  -7.57966669E-07, 2.09470555E-10,
+            -2.16717794E-14, -1.08845772E+03, 5.45323129E+00};
+  n.low = {3.78245636E+00, -2.99673416E-03, 9.84730201E-06, -9.68129509E-09,
+           3.24372837E-12, -1.06394356E+03, 3.65767573E+00};
   return n;
 }
 
@@ -99,16 +99,18 @@ TEST_CASE("no wrapper, adsorbate phase") {
 TEST_CASE("what does not fit is an error, not a truncation") {
   Nasa7 n = o2_record();
   n.name = "a-name-of-19-chars!";
-  CHECK_THROWS_WITH_AS(write_nasa7_record(n),
-                       "error: species 'a-name-of-19-chars!': name has 19 characters; NASA-7 allows 18 (columns "
-                       "1-18): give a shorter `name` in the species file",
-                       InputError);
+  CHECK_THROWS_WITH_AS(
+      write_nasa7_record(n),
+      "error: species 'a-name-of-19-chars!': name has 19 characters; NASA-7 allows 18 (columns "
+      "1-18): give a shorter `name` in the species file",
+      InputError);
   n = o2_record();
   n.composition = {{"C", 1}, {"H", 3}, {"O", 1}, {"N", 1}, {"Cl", 1}};
-  CHECK_THROWS_WITH_AS(write_nasa7_record(n),
-                       "error: species 'O2' has 5 elements; the NASA-7 record holds four: use --form nasa9 (five) or "
-                       "--form json",
-                       InputError);
+  CHECK_THROWS_WITH_AS(
+      write_nasa7_record(n),
+      "error: species 'O2' has 5 elements; the NASA-7 record holds four: use --form nasa9 (five) or "
+      "--form json",
+      InputError);
   n = o2_record();
   n.composition = {{"C", 1000}};
   CHECK_THROWS_AS(write_nasa7_record(n), InputError);

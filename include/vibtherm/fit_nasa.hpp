@@ -33,8 +33,8 @@ FitRange default_fit_range(NasaForm form);  // NASA-7 200:1000:3000, NASA-9 200:
 //   both sides; at 298.15 K: H = ΔfH°(298.15 K), S = engine S°(298.15 K);
 // - warnings when a range's max error passes the thresholds below.
 struct FitThresholds {
-  double Cp_relative = 0.005;      // 0.5 % of Cp
-  double H_J_per_mol = 100.0;      // 0.1 kJ/mol
+  double Cp_relative = 0.005;  // 0.5 % of Cp
+  double H_J_per_mol = 100.0;  // 0.1 kJ/mol
   double S_J_per_mol_K = 0.1;
 };
 
@@ -45,8 +45,8 @@ struct FitOptions {
   // largest Cp error of the example species from ~0.45 % to ~0.75 % (at 200 K).
   bool Cp_slope_continuous = false;
   double grid_step_K = 5.0;
-  double auto_step_K = 50.0;    // spacing of the `auto` candidates
-  double auto_margin_K = 100.0; // candidates keep this far from the neighbouring breakpoints
+  double auto_step_K = 50.0;     // spacing of the `auto` candidates
+  double auto_margin_K = 100.0;  // candidates keep this far from the neighbouring breakpoints
   bool allow_missing_hf = false;
   FitThresholds thresholds;
 };
@@ -93,7 +93,7 @@ struct RangeErrors {
 // A stretch of the grid where the fitted Cp leaves its bounds.
 struct BoundsExcursion {
   double T_from_K = 0.0, T_to_K = 0.0;
-  bool above = false;              // above the classical limit (else below the lower one)
+  bool above = false;  // above the classical limit (else below the lower one)
   double worst_Cp_over_R = 0.0;
   double bound_over_R = 0.0;
 };

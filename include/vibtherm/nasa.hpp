@@ -40,8 +40,8 @@ struct Nasa7 {
   double T_low_K = 300.0;
   double T_mid_K = 1000.0;
   double T_high_K = 5000.0;
-  std::array<double, 7> low{};   // T_low..T_mid
-  std::array<double, 7> high{};  // T_mid..T_high
+  std::array<double, 7> low{};        // T_low..T_mid
+  std::array<double, 7> high{};       // T_mid..T_high
   std::vector<std::string> comments;  // written as '!' lines above the record
 
   // The lower set is used up to and including T_mid. Outside [T_low, T_high] the nearer
@@ -68,10 +68,10 @@ NasaProperties nasa9_properties(const Nasa9Range& range, double T_K);
 
 struct Nasa9 {
   std::string name;
-  std::string comment;    // record 1, columns 19-80
-  std::string date_code;  // record 2, columns 4-9
+  std::string comment;                     // record 1, columns 19-80
+  std::string date_code;                   // record 2, columns 4-9
   std::vector<ElementAmount> composition;  // at most five elements
-  int phase = 0;          // 0 gas, nonzero condensed (the published convention)
+  int phase = 0;                           // 0 gas, nonzero condensed (the published convention)
   double molar_mass_g_per_mol = 0.0;
   double enthalpy_of_formation_J_per_mol = 0.0;  // ΔfH°(298.15 K)
   double H298_minus_H0_J_per_mol = 0.0;

@@ -25,8 +25,8 @@ struct EvalOptions {
 
 std::string caption(const NasaPolynomial& p) {
   if (const auto* n7 = std::get_if<Nasa7>(&p))
-    return fmt::format("NASA-7 polynomial, {:g}-{:g}-{:g} K, phase {}", n7->T_low_K, n7->T_mid_K, n7->T_high_K,
-                       n7->phase);
+    return fmt::format("NASA-7 polynomial, {:g}-{:g}-{:g} K, phase {}", n7->T_low_K, n7->T_mid_K,
+                       n7->T_high_K, n7->phase);
   const auto& n9 = std::get<Nasa9>(p);
   std::string bp = fmt::format("{:g}", n9.T_min_K());
   for (const auto& r : n9.ranges) bp += fmt::format("-{:g}", r.T_high_K);
@@ -39,9 +39,10 @@ void setup_eval(CLI::App& sub) {
   auto o = std::make_shared<EvalOptions>();
   sub.add_option("file", o->file, "NASA-7 or NASA-9 thermo file")->required();
   sub.add_option("--species", o->species, "species to tabulate (repeatable; default: all, in file order)");
-  sub.add_option("--temps", o->temps_text,
-                 "temperatures in K: list '298.15,500' and/or ranges 'START:STOP:STEP' (default: 298.15 K and "
-                 "300-3000 K every 100 K, within each polynomial's range)");
+  sub.add_option(
+      "--temps", o->temps_text,
+      "temperatures in K: list '298.15,500' and/or ranges 'START:STOP:STEP' (default: 298.15 K and "
+      "300-3000 K every 100 K, within each polynomial's range)");
   sub.add_option("--format", o->format, "output format")
       ->check(CLI::IsMember({"text", "csv", "json"}))
       ->capture_default_str();
@@ -58,14 +59,16 @@ void setup_eval(CLI::App& sub) {
           if (polynomial_name(p) == name) found = &p;
         if (!found) {
           std::string names;
-          for (std::size_t k = 0; k < all.size() && k < 10; ++k) names += (k ? ", " : "") + polynomial_name(all[k]);
+          for (std::size_t k = 0; k < all.size() && k < 10; ++k)
+            names += (k ? ", " : "") + polynomial_name(all[k]);
           fail({o->file, 0, 0}, fmt::format("--species '{}': not in the file (it holds {}{})", name, names,
                                             all.size() > 10 ? ", ..." : ""));
         }
         chosen.push_back(found);
       }
     }
-    const std::vector<double> asked = o->temps_text.empty() ? std::vector<double>{} : parse_temperatures(o->temps_text);
+    const std::vector<double> asked =
+        o->temps_text.empty() ? std::vector<double>{} : parse_temperatures(o->temps_text);
     std::vector<SpeciesTable> tables;
     for (const NasaPolynomial* p : chosen) {
       const std::string& name = polynomial_name(*p);
@@ -85,7 +88,9 @@ void setup_eval(CLI::App& sub) {
       tables.push_back(std::move(table));
     }
     const std::string& f = o->format;
-    write_output(o->output, f == "json" ? table_json(tables) : f == "csv" ? table_csv(tables) : table_text(tables));
+    write_output(o->output, f == "json"  ? table_json(tables)
+                            : f == "csv" ? table_csv(tables)
+                                         : table_text(tables));
   });
 }
 

@@ -49,9 +49,10 @@ void log_fit(const SpeciesFit& f) {
   const FitResult& r = f.fit;
   std::string ranges;
   for (const auto& e : r.errors)
-    ranges += fmt::format("; {:g}-{:g} K: Cp max {:.3f} % rms {:.3f} %, H max {:.3f} kJ/mol, S max {:.4f} J/(mol K)",
-                          e.T_low_K, e.T_high_K, 100 * e.max_Cp_relative, 100 * e.rms_Cp_relative,
-                          e.max_H_J_per_mol / 1e3, e.max_S_J_per_mol_K);
+    ranges += fmt::format(
+        "; {:g}-{:g} K: Cp max {:.3f} % rms {:.3f} %, H max {:.3f} kJ/mol, S max {:.4f} J/(mol K)", e.T_low_K,
+        e.T_high_K, 100 * e.max_Cp_relative, 100 * e.rms_Cp_relative, e.max_H_J_per_mol / 1e3,
+        e.max_S_J_per_mol_K);
   spdlog::info("{}: fit{}", r.name, ranges);
   if (r.searched_index >= 0)
     spdlog::info("{}: breakpoint searched: {:g} K (largest Cp error {:.3f} %)", r.name,
@@ -73,7 +74,8 @@ void setup_fit(CLI::App& sub) {
                  "default 200:1000:6000); one inner value may be 'auto'");
   sub.add_flag("--allow-missing-hf", o->allow_missing_hf,
                "write H(298.15 K) = 0 for species without enthalpy_of_formation (noted in the output)");
-  sub.add_flag("--cp-slope", o->cp_slope, "make dCp/dT continuous at the joints too (default: Cp value only)");
+  sub.add_flag("--cp-slope", o->cp_slope,
+               "make dCp/dT continuous at the joints too (default: Cp value only)");
   sub.add_option("--grid-step", o->grid_step_K, "spacing of the fit grid in K")->capture_default_str();
   sub.add_flag("--no-wrapper", o->no_wrapper, "omit the THERMO ... END (NASA-9: thermo ... END) wrapper");
   sub.callback([o] {
@@ -86,7 +88,8 @@ void setup_fit(CLI::App& sub) {
     fit.range = o->range.empty() ? default_fit_range(fit.form) : parse_fit_range(o->range, fit.form);
     fit.allow_missing_hf = o->allow_missing_hf;
     fit.Cp_slope_continuous = o->cp_slope;
-    if (!(o->grid_step_K > 0.0)) fail({}, fmt::format("--grid-step {}: expected a positive step in K", o->grid_step_K));
+    if (!(o->grid_step_K > 0.0))
+      fail({}, fmt::format("--grid-step {}: expected a positive step in K", o->grid_step_K));
     fit.grid_step_K = o->grid_step_K;
 
     Batch batch = load_batch(o->common);
@@ -100,7 +103,8 @@ void setup_fit(CLI::App& sub) {
         if (o->form == "nasa9") write_nasa9_record(std::get<Nasa9>(f.polynomial));
         log_fit(f);
         const std::string& file = p.species.origin.file;
-        records.push_back({std::move(f), {file, file.empty() ? "" : file_sha256(file), model_option_list(*o)}});
+        records.push_back(
+            {std::move(f), {file, file.empty() ? "" : file_sha256(file), model_option_list(*o)}});
       } catch (const InputError& e) {
         if (!o->common.keep_going) throw;
         batch.failures.push_back(e.what());
@@ -109,7 +113,8 @@ void setup_fit(CLI::App& sub) {
     }
     const std::vector<std::string> header = {
         fmt::format("vibtherm {}: rigid-rotor harmonic-oscillator model, constrained fit", VIBTHERM_VERSION),
-        fmt::format("standard state {}, frequency scale {:g}", o->common.standard_state, o->common.frequency_scale)};
+        fmt::format("standard state {}, frequency scale {:g}", o->common.standard_state,
+                    o->common.frequency_scale)};
     std::string text;
     if (o->form == "json") {
       text = write_fit_json(records, fit);
