@@ -298,7 +298,7 @@ YamlReader::Entries YamlReader::entries(const YAML::Node& map, const std::string
                                         const std::vector<std::string>& allowed) const {
   Entries out;
   for (auto it = map.begin(); it != map.end(); ++it) {
-    const YAML::Node& key = it->first;
+    const YAML::Node key = it->first;  // a copy: the iterator yields a temporary pair
     if (!key.IsScalar()) error(key, "a key of " + what + " is " + describe(key) + ", expected a plain name");
     const std::string& k = key.Scalar();
     if (std::find(allowed.begin(), allowed.end(), k) == allowed.end()) {
