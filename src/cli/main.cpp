@@ -20,6 +20,8 @@ constexpr SubcommandEntry subcommands[] = {
     {"inspect", "derived facts: formula, mass, moments, rotor type, symmetry, ZPE, mode counts",
      vibtherm::cli::setup_inspect},
     {"table", "thermodynamic functions (Cp, S, H, G) versus temperature", vibtherm::cli::setup_table},
+    {"modes", "per-mode activation and effective quadratic degrees of freedom F = 2 Cv/R versus temperature",
+     vibtherm::cli::setup_modes},
 };
 
 }  // namespace
@@ -43,9 +45,16 @@ int main(int argc, char** argv) {
   });
   try {
     app.parse(argc, argv);
+  } catch (const CLI::CallForHelp& e) {
+    return app.exit(e);
+  } catch (const CLI::CallForAllHelp& e) {
+    return app.exit(e);
+  } catch (const CLI::CallForVersion& e) {
+    return app.exit(e);
   } catch (const CLI::ParseError& e) {
-    int status = app.exit(e);
-    return status == 0 ? 0 : vibtherm::cli::exit_input_error;
+    // One line, like every other input error.
+    std::cerr << "error: " << e.what() << " (see vibtherm --help)\n";
+    return vibtherm::cli::exit_input_error;
   } catch (const vibtherm::cli::Exit& e) {
     return e.status;
   } catch (const vibtherm::InputError& e) {

@@ -1,0 +1,41 @@
+// Derived facts of a prepared species for `inspect`: formula, masses, rotor, symmetry,
+// zero-point energy and mode counts. Pure computation; writers format it.
+#pragma once
+
+#include <string>
+#include <vector>
+
+#include "vibtherm/thermo.hpp"
+
+namespace vibtherm {
+
+struct SpeciesFacts {
+  std::string name;
+  std::string formula;             // Hill order, e.g. "CH4O"; empty when unknown
+  double mass_amu = 0.0;           // isotopic mass used by the model
+  double molar_mass_g_per_mol = 0.0;  // from standard atomic weights (0 when unknown)
+  RotorType rotor = RotorType::atom;
+  std::array<double, 3> moments_amu_A2{};
+  std::vector<double> rotational_constants_cm1;
+  std::vector<double> rotational_constants_GHz;
+  std::vector<double> rotational_temperatures_K;
+  int symmetry_number = 1;
+  int atom_count = 0;
+  int expected_modes = 0;
+  int given_modes = 0;
+  int imaginary_modes = 0;
+  std::vector<double> frequencies_cm1;  // used (scaled), negative = imaginary reaction coordinate
+  double zero_point_energy_J_per_mol = 0.0;
+  std::string phase;  // "gas" or "adsorbate"
+  int ground_degeneracy = 1;
+  std::vector<std::string> warnings;
+  std::vector<std::string> notes;
+};
+
+SpeciesFacts describe_species(const PreparedSpecies& prepared);
+
+// Hill-order formula string from an element → count map (C first, then H, then
+// alphabetical; alphabetical throughout when there is no carbon).
+std::string hill_formula(const std::map<std::string, int>& formula);
+
+}  // namespace vibtherm

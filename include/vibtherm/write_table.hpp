@@ -1,0 +1,27 @@
+// Writers for thermodynamic tables: aligned text, CSV with units in the header, and JSON
+// with the pinned keys (T, Cp, S, H_minus_H298, ...). Formatting only, no physics.
+#pragma once
+
+#include <string>
+#include <vector>
+
+#include "vibtherm/thermo.hpp"
+
+namespace vibtherm {
+
+struct SpeciesTable {
+  std::string name;
+  std::string caption;              // one line shown above the text table (model summary)
+  std::vector<ThermoPoint> rows;
+  bool has_model_columns = true;    // Cv, H−H0 and the per-motion breakdown are known
+};
+
+struct TableWriteOptions {
+  bool breakdown = false;  // per-motion Cp, S, H−H0 (translation, rotation, vibration, electronic)
+};
+
+std::string table_text(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options = {});
+std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options = {});
+std::string table_json(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options = {});
+
+}  // namespace vibtherm

@@ -1,0 +1,68 @@
+#include "vibtherm/facts.hpp"
+
+#include <algorithm>
+
+#include "vibtherm/elements.hpp"
+
+namespace vibtherm {
+
+std::string hill_formula(const std::map<std::string, int>& formula) {
+  std::vector<std::string> order;
+  const bool has_carbon = formula.count("C") > 0;
+  if (has_carbon) {
+    order.push_back("C");
+    if (formula.count("H")) order.push_back("H");
+  }
+  for (const auto& [symbol, count] : formula)
+    if (!has_carbon || (symbol != "C" && symbol != "H")) order.push_back(symbol);
+  std::string out;
+  for (const auto& symbol : order) {
+    const int count = formula.at(symbol);
+    out += symbol;
+    if (count != 1) out += std::to_string(count);
+  }
+  return out;
+}
+
+SpeciesFacts describe_species(const PreparedSpecies& p) {
+  SpeciesFacts f;
+  f.name = p.species.name;
+  f.formula = hill_formula(p.species.formula);
+  f.mass_amu = p.rotor.mass_amu;
+  double molar_mass = 0.0;
+  bool known = !p.species.formula.empty();
+  for (const auto& [symbol, count] : p.species.formula) {
+    const auto element = find_element(symbol);
+    if (!element) {
+      known = false;
+      break;
+    }
+    molar_mass += count * element->standard_atomic_weight;
+  }
+  f.molar_mass_g_per_mol = known ? molar_mass : 0.0;
+  f.rotor = p.rotor.type;
+  f.moments_amu_A2 = p.rotor.moments_amu_A2;
+  f.rotational_constants_cm1 = p.rotor.rotational_constants_cm1;
+  f.rotational_constants_GHz = p.rotor.rotational_constants_GHz;
+  f.rotational_temperatures_K = p.rotor.rotational_temperatures_K;
+  f.symmetry_number = p.species.symmetry_number;
+  f.atom_count = atom_count(p.species);
+  f.expected_modes = expected_vibration_count(p.species, p.rotor.type);
+  f.given_modes = static_cast<int>(p.species.frequencies_cm1.size());
+  f.imaginary_modes = static_cast<int>(
+      std::count_if(p.species.frequencies_cm1.begin(), p.species.frequencies_cm1.end(), [](double v) { return v < 0; }));
+  f.frequencies_cm1 = p.used_frequencies_cm1;
+  f.zero_point_energy_J_per_mol = p.zero_point_energy_J_per_mol;
+  f.phase = p.is_gas ? "gas" : "adsorbate";
+  int ground = 0;
+  double lowest = p.species.electronic_levels.empty() ? 0.0 : p.species.electronic_levels[0].energy_cm1;
+  for (const auto& level : p.species.electronic_levels) lowest = std::min(lowest, level.energy_cm1);
+  for (const auto& level : p.species.electronic_levels)
+    if (level.energy_cm1 == lowest) ground += level.degeneracy;
+  f.ground_degeneracy = ground;
+  f.warnings = p.warnings;
+  f.notes = p.notes;
+  return f;
+}
+
+}  // namespace vibtherm

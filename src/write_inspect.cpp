@@ -1,0 +1,103 @@
+#include "vibtherm/write_inspect.hpp"
+
+#include <fmt/format.h>
+#include <fmt/ranges.h>
+
+#include <nlohmann/json.hpp>
+
+namespace vibtherm {
+
+namespace {
+
+std::string numbers(const std::vector<double>& values, const char* spec) {
+  std::string out;
+  for (double v : values) out += (out.empty() ? "" : "  ") + fmt::format(fmt::runtime(spec), v);
+  return out.empty() ? "-" : out;
+}
+
+std::string wavenumbers(const std::vector<double>& values) {
+  std::string out;
+  int column = 0;
+  for (double v : values) {
+    if (column == 8) out += "\n" + std::string(22, ' '), column = 0;
+    out += v < 0 ? fmt::format("{:>9.1f}i", -v) : fmt::format("{:>9.1f} ", v);
+    ++column;
+  }
+  return out.empty() ? "-" : out;
+}
+
+}  // namespace
+
+std::string inspect_text(const std::vector<SpeciesFacts>& all) {
+  std::string out;
+  for (size_t k = 0; k < all.size(); ++k) {
+    const auto& f = all[k];
+    if (k > 0) out += '\n';
+    out += fmt::format("== {} ==\n", f.name);
+    auto line = [&](const char* label, const std::string& value) { out += fmt::format("  {:<20}{}\n", label, value); };
+    line("formula", f.formula.empty() ? "-" : f.formula);
+    line("phase", f.phase);
+    line("mass", fmt::format("{:.6f} amu (isotopic){}", f.mass_amu,
+                             f.molar_mass_g_per_mol > 0 ? fmt::format(", {:.4f} g/mol (standard atomic weights)",
+                                                                      f.molar_mass_g_per_mol)
+                                                        : std::string()));
+    line("rotor", rotor_type_name(f.rotor));
+    line("moments", fmt::format("{:.5f}  {:.5f}  {:.5f} amu A^2", f.moments_amu_A2[0], f.moments_amu_A2[1],
+                                f.moments_amu_A2[2]));
+    line("rot. constants", numbers(f.rotational_constants_cm1, "{:.5f}") + " cm^-1");
+    line("", numbers(f.rotational_constants_GHz, "{:.4f}") + " GHz");
+    line("rot. temperatures", numbers(f.rotational_temperatures_K, "{:.4f}") + " K");
+    line("symmetry number", std::to_string(f.symmetry_number));
+    line("ground degeneracy", std::to_string(f.ground_degeneracy));
+    line("modes", fmt::format("{} given, {} expected for N = {}, {} imaginary", f.given_modes, f.expected_modes,
+                              f.atom_count, f.imaginary_modes));
+    line("frequencies", wavenumbers(f.frequencies_cm1) + (f.frequencies_cm1.empty() ? "" : " cm^-1"));
+    line("zero-point energy", fmt::format("{:.4f} kJ/mol", f.zero_point_energy_J_per_mol / 1e3));
+    for (const auto& w : f.warnings) line("warning", w);
+    for (const auto& n : f.notes) line("note", n);
+  }
+  return out;
+}
+
+std::string inspect_csv(const std::vector<SpeciesFacts>& all) {
+  std::string out =
+      "species,formula,phase,rotor,mass_amu,molar_mass_g_per_mol,Ia_amu_A2,Ib_amu_A2,Ic_amu_A2,symmetry_number,"
+      "atoms,modes_given,modes_expected,imaginary,zpe_kJ_per_mol\n";
+  for (const auto& f : all) {
+    out += fmt::format("{},{},{},{},{:.6f},{:.4f},{:.6f},{:.6f},{:.6f},{},{},{},{},{},{:.6f}\n", f.name, f.formula, f.phase,
+                       rotor_type_name(f.rotor), f.mass_amu, f.molar_mass_g_per_mol, f.moments_amu_A2[0],
+                       f.moments_amu_A2[1], f.moments_amu_A2[2], f.symmetry_number, f.atom_count, f.given_modes,
+                       f.expected_modes, f.imaginary_modes, f.zero_point_energy_J_per_mol / 1e3);
+  }
+  return out;
+}
+
+std::string inspect_json(const std::vector<SpeciesFacts>& all) {
+  nlohmann::ordered_json doc;
+  doc["species"] = nlohmann::ordered_json::array();
+  for (const auto& f : all) {
+    nlohmann::ordered_json s;
+    s["name"] = f.name;
+    s["rotor"] = rotor_type_name(f.rotor);
+    s["mass"] = f.mass_amu;
+    s["moments_of_inertia"] = f.moments_amu_A2;
+    s["symmetry_number"] = f.symmetry_number;
+    s["frequencies"] = f.frequencies_cm1;
+    s["zpe"] = f.zero_point_energy_J_per_mol / 1e3;
+    s["formula"] = f.formula;
+    s["phase"] = f.phase;
+    s["molar_mass"] = f.molar_mass_g_per_mol;
+    s["rotational_constants_cm1"] = f.rotational_constants_cm1;
+    s["rotational_constants_GHz"] = f.rotational_constants_GHz;
+    s["rotational_temperatures_K"] = f.rotational_temperatures_K;
+    s["ground_degeneracy"] = f.ground_degeneracy;
+    s["mode_counts"] = {{"given", f.given_modes}, {"expected", f.expected_modes}, {"imaginary", f.imaginary_modes},
+                        {"atoms", f.atom_count}};
+    s["warnings"] = f.warnings;
+    s["notes"] = f.notes;
+    doc["species"].push_back(s);
+  }
+  return doc.dump(2) + '\n';
+}
+
+}  // namespace vibtherm

@@ -1,0 +1,146 @@
+#include "vibtherm/write_table.hpp"
+
+#include <fmt/format.h>
+
+#include <array>
+#include <nlohmann/json.hpp>
+
+#include "vibtherm/constants.hpp"
+
+namespace vibtherm {
+
+namespace {
+
+constexpr double R = constants::gas_constant_J_per_mol_K;
+
+struct MotionRef {
+  const char* name;
+  const MotionTerms ThermoPoint::*terms;
+};
+constexpr std::array<MotionRef, 4> motions{{{"translation", &ThermoPoint::translation},
+                                            {"rotation", &ThermoPoint::rotation},
+                                            {"vibration", &ThermoPoint::vibration},
+                                            {"electronic", &ThermoPoint::electronic}}};
+
+// Short labels for the text breakdown columns.
+constexpr std::array<const char*, 4> motion_tags{"trans", "rot", "vib", "elec"};
+
+}  // namespace
+
+std::string table_text(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options) {
+  std::string out;
+  for (size_t k = 0; k < tables.size(); ++k) {
+    const auto& table = tables[k];
+    const bool model = table.has_model_columns;
+    const bool breakdown = options.breakdown && model;
+    if (k > 0) out += '\n';
+    out += fmt::format("== {} ==\n", table.name);
+    if (!table.caption.empty()) out += table.caption + '\n';
+    // Headings and a units line; widths are fixed so columns line up across species.
+    std::string head = fmt::format("{:>9} {:>9}", "T", "Cp");
+    std::string units = fmt::format("{:>9} {:>9}", "K", "J/mol/K");
+    if (model) head += fmt::format(" {:>9}", "Cv"), units += fmt::format(" {:>9}", "J/mol/K");
+    head += fmt::format(" {:>9} {:>10}", "S", "H-H298");
+    units += fmt::format(" {:>9} {:>10}", "J/mol/K", "kJ/mol");
+    if (model) head += fmt::format(" {:>9}", "H-H0"), units += fmt::format(" {:>9}", "kJ/mol");
+    head += fmt::format(" {:>10} {:>11}", "G-H298", "-(G-H298)/T");
+    units += fmt::format(" {:>10} {:>11}", "kJ/mol", "J/mol/K");
+    if (breakdown) {
+      for (const char* tag : motion_tags) {
+        head += fmt::format(" {:>8} {:>8}", fmt::format("Cp.{}", tag), fmt::format("S.{}", tag));
+        units += fmt::format(" {:>8} {:>8}", "J/mol/K", "J/mol/K");
+      }
+    }
+    out += head + '\n' + units + '\n';
+    for (const auto& r : table.rows) {
+      std::string line = fmt::format("{:>9.2f} {:>9.3f}", r.T_K, r.Cp_J_per_mol_K);
+      if (model) line += fmt::format(" {:>9.3f}", r.Cv_J_per_mol_K);
+      line += fmt::format(" {:>9.3f} {:>10.3f}", r.S_J_per_mol_K, r.H_minus_H298_J_per_mol / 1e3);
+      if (model) line += fmt::format(" {:>9.3f}", r.H_minus_H0_J_per_mol / 1e3);
+      line += fmt::format(" {:>10.3f} {:>11.3f}", r.G_minus_H298_J_per_mol / 1e3, r.gibbs_function_J_per_mol_K);
+      if (breakdown)
+        for (const auto& m : motions)
+          line += fmt::format(" {:>8.3f} {:>8.3f}", (r.*m.terms).Cp_over_R * R, (r.*m.terms).S_over_R * R);
+      out += line + '\n';
+    }
+  }
+  return out;
+}
+
+std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options) {
+  const bool breakdown = options.breakdown;
+  std::string out =
+      "species,T_K,Cp_J_per_mol_K,Cv_J_per_mol_K,S_J_per_mol_K,H_minus_H298_kJ_per_mol,H_minus_H0_kJ_per_mol,"
+      "G_minus_H298_kJ_per_mol,minus_G_minus_H298_over_T_J_per_mol_K";
+  if (breakdown)
+    for (const auto& m : motions) out += fmt::format(",Cp_{0}_J_per_mol_K,S_{0}_J_per_mol_K,H_minus_H0_{0}_kJ_per_mol", m.name);
+  out += '\n';
+  for (const auto& table : tables) {
+    // Names are quoted when they hold a comma or quote (RFC 4180).
+    std::string name = table.name;
+    if (name.find_first_of(",\"\n") != std::string::npos) {
+      std::string quoted = "\"";
+      for (char ch : name) quoted += ch == '"' ? std::string("\"\"") : std::string(1, ch);
+      name = quoted + "\"";
+    }
+    for (const auto& r : table.rows) {
+      const bool model = table.has_model_columns;
+      out += fmt::format("{},{},{:.6f},{},{:.6f},{:.6f},{},{:.6f},{:.6f}", name, r.T_K, r.Cp_J_per_mol_K,
+                         model ? fmt::format("{:.6f}", r.Cv_J_per_mol_K) : "", r.S_J_per_mol_K,
+                         r.H_minus_H298_J_per_mol / 1e3, model ? fmt::format("{:.6f}", r.H_minus_H0_J_per_mol / 1e3) : "",
+                         r.G_minus_H298_J_per_mol / 1e3, r.gibbs_function_J_per_mol_K);
+      if (breakdown)
+        for (const auto& m : motions) {
+          const MotionTerms& t = r.*m.terms;
+          out += model ? fmt::format(",{:.6f},{:.6f},{:.6f}", t.Cp_over_R * R, t.S_over_R * R, t.H_over_RT * R * r.T_K / 1e3)
+                       : std::string(",,,");
+        }
+      out += '\n';
+    }
+  }
+  return out;
+}
+
+std::string table_json(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options) {
+  nlohmann::ordered_json doc;
+  doc["units"] = {{"T", "K"},
+                  {"Cp", "J/(mol K)"},
+                  {"Cv", "J/(mol K)"},
+                  {"S", "J/(mol K)"},
+                  {"H_minus_H298", "kJ/mol"},
+                  {"H_minus_H0", "kJ/mol"},
+                  {"G_minus_H298", "kJ/mol"},
+                  {"minus_G_minus_H298_over_T", "J/(mol K)"}};
+  doc["species"] = nlohmann::ordered_json::array();
+  for (const auto& table : tables) {
+    nlohmann::ordered_json entry;
+    entry["name"] = table.name;
+    entry["rows"] = nlohmann::ordered_json::array();
+    for (const auto& r : table.rows) {
+      nlohmann::ordered_json row;
+      row["T"] = r.T_K;
+      row["Cp"] = r.Cp_J_per_mol_K;
+      if (table.has_model_columns) row["Cv"] = r.Cv_J_per_mol_K;
+      row["S"] = r.S_J_per_mol_K;
+      row["H_minus_H298"] = r.H_minus_H298_J_per_mol / 1e3;
+      if (table.has_model_columns) row["H_minus_H0"] = r.H_minus_H0_J_per_mol / 1e3;
+      row["G_minus_H298"] = r.G_minus_H298_J_per_mol / 1e3;
+      row["minus_G_minus_H298_over_T"] = r.gibbs_function_J_per_mol_K;
+      if (options.breakdown && table.has_model_columns) {
+        for (const auto& m : motions) {
+          const MotionTerms& t = r.*m.terms;
+          row["motions"][m.name] = {{"Cp", t.Cp_over_R * R},
+                                    {"Cv", t.Cv_over_R * R},
+                                    {"S", t.S_over_R * R},
+                                    {"H_minus_H0", t.H_over_RT * R * r.T_K / 1e3},
+                                    {"ln_q", t.ln_q}};
+        }
+      }
+      entry["rows"].push_back(row);
+    }
+    doc["species"].push_back(entry);
+  }
+  return doc.dump(2) + '\n';
+}
+
+}  // namespace vibtherm

@@ -1,0 +1,83 @@
+#!/usr/bin/env python3
+"""Command-line behaviour: exit codes, pinned JSON keys, atomic output, --keep-going.
+
+Usage: run_cli_checks.py VIBTHERM_EXE PROJECT_ROOT
+"""
+import json
+import os
+import subprocess
+import sys
+import tempfile
+
+exe, root = sys.argv[1], sys.argv[2]
+examples = os.path.join(root, "examples", "fuel-additive")
+water = os.path.join(examples, "water.yaml")
+results = []
+
+
+def run(*args):
+    return subprocess.run([exe, *args], capture_output=True, text=True)
+
+
+def check(name, condition, detail=""):
+    results.append(condition)
+    print(("ok    " if condition else "FAIL  ") + name + ("" if condition else f"  {detail}"))
+
+
+# table JSON: pinned keys (design.md section 5).
+r = run("table", water, "--temps", "298.15,1000", "--format", "json")
+doc = json.loads(r.stdout) if r.returncode == 0 else {}
+row = doc.get("species", [{}])[0].get("rows", [{}])[0] if doc else {}
+check("table json keys", r.returncode == 0 and "units" in doc and
+      all(k in row for k in ("T", "Cp", "S", "H_minus_H298")), r.stderr)
+check("table json H-H298 is zero at 298.15 K", abs(row.get("H_minus_H298", 1.0)) < 1e-9)
+
+# inspect JSON: pinned keys.
+r = run("inspect", water, "--format", "json")
+spec = json.loads(r.stdout)["species"][0] if r.returncode == 0 else {}
+check("inspect json keys", all(k in spec for k in ("name", "rotor", "mass", "moments_of_inertia",
+                                                   "symmetry_number", "frequencies", "zpe")), r.stderr)
+check("inspect rotor of water", spec.get("rotor") == "nonlinear")
+check("moments ascending", spec.get("moments_of_inertia", [1, 0]) == sorted(spec.get("moments_of_inertia", [1, 0])))
+
+# CSV has units in the header.
+r = run("table", water, "--temps", "300", "--format", "csv")
+check("csv header with units", r.returncode == 0 and "Cp_J_per_mol_K" in r.stdout.splitlines()[0])
+
+# Directory input keeps sorted order; -o writes atomically and leaves no temporary file.
+with tempfile.TemporaryDirectory() as tmp:
+    out = os.path.join(tmp, "t.json")
+    r = run("table", examples, "--temps", "500", "--format", "json", "-o", out)
+    names = [s["name"] for s in json.load(open(out))["species"]] if r.returncode == 0 else []
+    check("directory input", r.returncode == 0 and len(names) >= 6, r.stderr)
+    check("no temporary files left", os.listdir(tmp) == ["t.json"], str(os.listdir(tmp)))
+
+    # --keep-going: good species written, failures listed, exit 1.
+    bad = os.path.join(tmp, "bad.yaml")
+    open(bad, "w").write("name: broken\natoms:\n  - [Xx, 0, 0, 0]\n")
+    out2 = os.path.join(tmp, "k.json")
+    r = run("table", water, bad, "--format", "json", "-o", out2, "--keep-going")
+    check("keep-going exits 1", r.returncode == 1, f"{r.returncode} {r.stderr}")
+    check("keep-going writes the good species",
+          os.path.exists(out2) and [s["name"] for s in json.load(open(out2))["species"]] == ["H2O"])
+    # Without it: exit 2 and nothing written.
+    out3 = os.path.join(tmp, "n.json")
+    r = run("table", water, bad, "-o", out3)
+    check("input error exits 2", r.returncode == 2, f"{r.returncode}")
+    check("input error writes nothing", not os.path.exists(out3))
+    check("input error is one line", len(r.stderr.strip().splitlines()) == 1, r.stderr)
+
+# Usage errors exit 2; --help exits 0.
+check("unknown option exits 2", run("table", water, "--bogus").returncode == 2)
+check("bad format exits 2", run("table", water, "--format", "xml").returncode == 2)
+check("help exits 0", run("--help").returncode == 0)
+
+# Standard states: 1 atm lowers S by R ln(1.01325) (ideal-gas identity).
+def s_at(*extra):
+    r = run("table", water, "--temps", "298.15", "--format", "json", *extra)
+    return json.loads(r.stdout)["species"][0]["rows"][0]["S"]
+check("1 atm standard state", abs(s_at() - s_at("--standard-state", "atm") - 8.314462618 * 0.013163) < 1e-3)
+
+failed = results.count(False)
+print(f"{len(results) - failed} passed, {failed} failed")
+sys.exit(1 if failed else 0)
