@@ -1,4 +1,5 @@
-// Conversions of unit-bearing input values to SI at the edges of the library.
+// Conversions of unit-bearing input values to SI at the edges of the library, and the
+// locale-independent number parsing every reader uses.
 #pragma once
 
 #include <optional>
@@ -8,19 +9,32 @@
 
 namespace vibtherm {
 
-// Wavenumber-like quantities: "cm^-1" (also "cm-1", "1/cm"), "GHz", "meV", "K".
+// Wavenumber-like quantities: "cm^-1" (also "cm-1", "1/cm"), "GHz", "MHz", "meV", "K".
 // Returns the value in cm^-1, or nullopt for an unknown unit.
 std::optional<double> to_wavenumber_cm1(double value, std::string_view unit);
 
-// Molar energies: "kJ/mol", "kcal/mol", "J/mol", "eV", "hartree" (per particle for eV and hartree).
-// Returns J/mol, or nullopt for an unknown unit.
+// Molar energies: "kJ/mol", "kcal/mol" (thermochemical calorie), "J/mol", "eV", "hartree"
+// (per particle for eV and hartree, multiplied by N_A). Returns J/mol, or nullopt for an
+// unknown unit.
 std::optional<double> to_energy_J_per_mol(double value, std::string_view unit);
 
-// Pressure text such as "1bar", "1 atm", "101325Pa", "100kPa". nullopt if unreadable.
+// Pressure text: a number, optional blanks, and a unit, as in "1bar", "1 atm",
+// "101325Pa", "100kPa", "1e5 Pa". Units: Pa, hPa, kPa, MPa, mbar, bar, atm, Torr.
+// A bare number is refused rather than guessed: "1" could mean 1 bar or 1 Pa, five
+// orders of magnitude apart. nullopt if unreadable, not finite, or not positive.
 std::optional<double> parse_pressure_Pa(std::string_view text);
+
+// As parse_pressure_Pa, but throws InputError (no location) saying what was wrong.
+double parse_pressure_Pa_or_throw(std::string_view text);
+
+// A whole string as a finite decimal number ("1", "-2.5", "+3e-4"), independent of the
+// C++ locale (std::from_chars). Surrounding blanks are not allowed; nullopt otherwise,
+// including for "nan" and "inf".
+std::optional<double> parse_number(std::string_view text);
 
 // Comma-separated list of units accepted by each function above, for error messages.
 std::string wavenumber_units_list();
 std::string energy_units_list();
+std::string pressure_units_list();
 
 }  // namespace vibtherm
