@@ -69,5 +69,6 @@ int batch_status(const Batch& batch);
 // Each subcommand file provides one of these; main.cpp lists them in a table.
 void setup_inspect(CLI::App& sub);
 void setup_table(CLI::App& sub);
+void setup_modes(CLI::App& sub);
 
 }  // namespace vibtherm::cli

@@ -20,6 +20,8 @@ constexpr SubcommandEntry subcommands[] = {
     {"inspect", "derived facts: formula, mass, moments, rotor type, symmetry, ZPE, mode counts",
      vibtherm::cli::setup_inspect},
     {"table", "thermodynamic functions (Cp, S, H, G) versus temperature", vibtherm::cli::setup_table},
+    {"modes", "per-mode activation and effective quadratic degrees of freedom F = 2 Cv/R versus temperature",
+     vibtherm::cli::setup_modes},
 };
 
 }  // namespace
