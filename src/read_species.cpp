@@ -283,7 +283,12 @@ class YamlReader {
   std::string name(const YAML::Node& node) const;
   std::vector<Atom> atoms(const YAML::Node& node, std::vector<SourceLocation>& where) const;
   void apply_isotopes(const YAML::Node& node, std::vector<Atom>& atoms) const;
-  std::vector<double> wavenumbers(const YAML::Node& node, const std::string& what, bool allow_single) const;
+  // A value with the node it came from, so later checks can point at it.
+  struct Located {
+    double value;
+    YAML::Node node;
+  };
+  std::vector<Located> wavenumbers(const YAML::Node& node, const std::string& what, bool allow_single) const;
   double wavenumber_value(const YAML::Node& node, const std::string& what) const;
   std::string unit_of(const Entries& e) const;
   std::vector<ElectronicLevel> electronic_levels(const YAML::Node& node) const;
@@ -298,7 +303,7 @@ YamlReader::Entries YamlReader::entries(const YAML::Node& map, const std::string
                                         const std::vector<std::string>& allowed) const {
   Entries out;
   for (auto it = map.begin(); it != map.end(); ++it) {
-    const YAML::Node& key = it->first;
+    const YAML::Node key = it->first;  // a copy: the iterator yields a temporary pair
     if (!key.IsScalar()) error(key, "a key of " + what + " is " + describe(key) + ", expected a plain name");
     const std::string& k = key.Scalar();
     if (std::find(allowed.begin(), allowed.end(), k) == allowed.end()) {
@@ -449,9 +454,9 @@ double YamlReader::wavenumber_value(const YAML::Node& node, const std::string& w
   return number(node, what);
 }
 
-std::vector<double> YamlReader::wavenumbers(const YAML::Node& node, const std::string& what,
-                                            bool allow_single) const {
-  std::vector<double> out;
+std::vector<YamlReader::Located> YamlReader::wavenumbers(const YAML::Node& node, const std::string& what,
+                                                         bool allow_single) const {
+  std::vector<Located> out;
   if (node.IsMap()) {
     Entries e = entries(node, what, {"values", "value", "unit"});
     const YAML::Node* values = find(e, "values");
@@ -463,21 +468,21 @@ std::vector<double> YamlReader::wavenumbers(const YAML::Node& node, const std::s
       error(*find(e, "unit"),
             "unknown wavenumber unit " + quote(unit) + ", expected one of " + wavenumber_units_list());
     if (value) {
-      out.push_back(*to_wavenumber_cm1(number(*value, what), unit));
+      out.push_back({*to_wavenumber_cm1(number(*value, what), unit), *value});
     } else {
       if (!values->IsSequence())
         error(*values, what + " 'values' is " + describe(*values) + ", expected a list of numbers");
       for (const YAML::Node& item : *values)
-        out.push_back(*to_wavenumber_cm1(number(item, what + " value"), unit));
+        out.push_back({*to_wavenumber_cm1(number(item, what + " value"), unit), item});
     }
     return out;
   }
   if (node.IsSequence()) {
     for (const YAML::Node& item : node)
-      out.push_back(wavenumber_value(item, what + " entry " + std::to_string(out.size() + 1)));
+      out.push_back({wavenumber_value(item, what + " entry " + std::to_string(out.size() + 1)), item});
     return out;
   }
-  if (allow_single && node.IsScalar()) return {number(node, what)};
+  if (allow_single && node.IsScalar()) return {{number(node, what), node}};
   error(node, what + " is " + describe(node) +
                   ", expected a list of numbers in cm^-1 or {values: [...], unit: ...}");
 }
@@ -649,14 +654,14 @@ Species YamlReader::read(const std::string& text) {
       error(e["moments_of_inertia"].key,
             "both 'rotational_constants' and 'moments_of_inertia' given, expected one of them");
     if (constants_node) {
-      std::vector<double> B_cm1 = wavenumbers(*constants_node, "'rotational_constants'", true);
+      std::vector<Located> B_cm1 = wavenumbers(*constants_node, "'rotational_constants'", true);
       if (B_cm1.size() != 1 && B_cm1.size() != 3)
         error(*constants_node, "'rotational_constants' has " + std::to_string(B_cm1.size()) +
                                    " values, expected 1 (linear molecule) or 3 (nonlinear molecule)");
-      for (double B : B_cm1) {
-        if (!(B > 0.0))
-          error(*constants_node, "'rotational_constants' has a value <= 0, expected positive constants");
-        rotor.moments_amu_A2.push_back(moment_from_rotational_constant_amu_A2(B));
+      for (const Located& B : B_cm1) {
+        if (!(B.value > 0.0))
+          error(B.node, "rotational constant is zero or negative, expected a positive constant");
+        rotor.moments_amu_A2.push_back(moment_from_rotational_constant_amu_A2(B.value));
       }
     } else if (moments_node) {
       rotor.moments_amu_A2 = positive_list(*moments_node, "'moments_of_inertia'");
@@ -688,11 +693,12 @@ Species YamlReader::read(const std::string& text) {
   }
 
   if (const YAML::Node* f = find(e, "frequencies")) {
-    species.frequencies_cm1 = wavenumbers(*f, "'frequencies'", false);
-    for (std::size_t i = 0; i < species.frequencies_cm1.size(); ++i)
-      if (species.frequencies_cm1[i] == 0.0)
-        error(*f, "frequency " + std::to_string(i + 1) + " is 0, expected a non-zero wavenumber " +
-                      "(negative for imaginary)");
+    for (const Located& nu : wavenumbers(*f, "'frequencies'", false)) {
+      if (nu.value == 0.0)
+        error(nu.node, "frequency " + std::to_string(species.frequencies_cm1.size() + 1) +
+                           " is 0, expected a non-zero wavenumber (negative for imaginary)");
+      species.frequencies_cm1.push_back(nu.value);
+    }
   } else if (!monatomic) {
     error(root, "missing required key 'frequencies', expected a list of wavenumbers in cm^-1 " +
                     std::string("(only a single atom has none)"));

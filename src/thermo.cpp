@@ -74,6 +74,33 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
                      p.species.name, join_wavenumbers(rejected)));
 }
 
+
+// Thermal functions at T without the H(298.15) reference.
+ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
+  ThermoPoint point;
+  point.T_K = T_K;
+  if (p.is_gas) {
+    point.translation = p.options.standard_state == StandardState::molar
+                            ? translation_terms_concentration(p.rotor.mass_amu, T_K, 1000.0)
+                            : translation_terms(p.rotor.mass_amu, T_K, p.options.pressure_Pa);
+    point.rotation = rigid_rotor_terms(p.rotor.rotational_temperatures_K, p.species.symmetry_number, T_K);
+  }
+  for (double v : p.vibrations_cm1) point.vibration += harmonic_oscillator_terms(v, T_K);
+  point.electronic = electronic_terms(p.species.electronic_levels, T_K);
+
+  MotionTerms total = point.translation;
+  total += point.rotation;
+  total += point.vibration;
+  total += point.electronic;
+  const double R = c::gas_constant_J_per_mol_K;
+  point.Cv_J_per_mol_K = R * total.Cv_over_R;
+  point.Cp_J_per_mol_K = R * total.Cp_over_R;
+  point.S_J_per_mol_K = R * total.S_over_R;
+  point.H_minus_H0_J_per_mol = R * T_K * total.H_over_RT;
+  return point;
+}
+
+
 }  // namespace
 
 PreparedSpecies prepare_species(const Species& species, const ModelOptions& options) {
@@ -109,43 +136,15 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
   for (double v : p.vibrations_cm1) sum_cm1 += v;
   p.zero_point_energy_J_per_mol = 0.5 * sum_cm1 * c::wavenumber_J_per_mol;
   if (!p.is_gas) p.notes.push_back("adsorbate: all 3N motions treated as harmonic vibrations");
+  p.H298_minus_H0_J_per_mol = evaluate_terms(p, c::reference_temperature_K).H_minus_H0_J_per_mol;
   return p;
 }
 
-namespace {
-
-// Thermal functions at T without the H(298.15) reference.
-ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
-  ThermoPoint point;
-  point.T_K = T_K;
-  if (p.is_gas) {
-    point.translation = p.options.standard_state == StandardState::molar
-                            ? translation_terms_concentration(p.rotor.mass_amu, T_K, 1000.0)
-                            : translation_terms(p.rotor.mass_amu, T_K, p.options.pressure_Pa);
-    point.rotation = rigid_rotor_terms(p.rotor.rotational_temperatures_K, p.species.symmetry_number, T_K);
-  }
-  for (double v : p.vibrations_cm1) point.vibration += harmonic_oscillator_terms(v, T_K);
-  point.electronic = electronic_terms(p.species.electronic_levels, T_K);
-
-  MotionTerms total = point.translation;
-  total += point.rotation;
-  total += point.vibration;
-  total += point.electronic;
-  const double R = c::gas_constant_J_per_mol_K;
-  point.Cv_J_per_mol_K = R * total.Cv_over_R;
-  point.Cp_J_per_mol_K = R * total.Cp_over_R;
-  point.S_J_per_mol_K = R * total.S_over_R;
-  point.H_minus_H0_J_per_mol = R * T_K * total.H_over_RT;
-  return point;
-}
-
-}  // namespace
 
 ThermoPoint evaluate(const PreparedSpecies& prepared, double T_K) {
   if (!(T_K > 0.0) || !std::isfinite(T_K)) fail({}, fmt::format("temperature must be positive, got {} K", T_K));
   ThermoPoint point = evaluate_terms(prepared, T_K);
-  const double h298_minus_h0 = evaluate_terms(prepared, c::reference_temperature_K).H_minus_H0_J_per_mol;
-  point.H_minus_H298_J_per_mol = point.H_minus_H0_J_per_mol - h298_minus_h0;
+  point.H_minus_H298_J_per_mol = point.H_minus_H0_J_per_mol - prepared.H298_minus_H0_J_per_mol;
   point.G_minus_H298_J_per_mol = point.H_minus_H298_J_per_mol - T_K * point.S_J_per_mol_K;
   point.gibbs_function_J_per_mol_K = -point.G_minus_H298_J_per_mol / T_K;
   return point;

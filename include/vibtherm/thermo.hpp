@@ -33,6 +33,7 @@ struct PreparedSpecies {
   std::vector<double> vibrations_cm1;  // real wavenumbers used, scaled, input order
   std::vector<double> used_frequencies_cm1;  // as reported: includes a dropped reaction coordinate (negative)
   double zero_point_energy_J_per_mol = 0.0;
+  double H298_minus_H0_J_per_mol = 0.0;  // thermal enthalpy at 298.15 K, the table's reference
   std::vector<std::string> warnings;  // things the user must see
   std::vector<std::string> notes;     // model choices worth stating
 };

@@ -71,5 +71,6 @@ void setup_inspect(CLI::App& sub);
 void setup_table(CLI::App& sub);
 void setup_fit(CLI::App& sub);
 void setup_eval(CLI::App& sub);
+void setup_modes(CLI::App& sub);
 
 }  // namespace vibtherm::cli

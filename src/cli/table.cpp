@@ -11,8 +11,10 @@ namespace vibtherm::cli {
 namespace {
 
 std::string caption(const PreparedSpecies& p) {
-  const char* state = p.options.standard_state == StandardState::molar ? "1 mol/L" : nullptr;
-  const std::string standard = state ? state : fmt::format("{:g} Pa", p.options.pressure_Pa);
+  std::string standard = fmt::format("{:g} Pa", p.options.pressure_Pa);
+  if (p.options.standard_state == StandardState::molar) standard = "1 mol/L";
+  else if (p.options.pressure_Pa == constants::bar_Pa) standard = "1 bar";
+  else if (p.options.pressure_Pa == constants::atmosphere_Pa) standard = "1 atm";
   if (!p.is_gas)
     return fmt::format("adsorbate, {} harmonic modes, ZPE {:.3f} kJ/mol", p.vibrations_cm1.size(),
                        p.zero_point_energy_J_per_mol / 1e3);

@@ -1,0 +1,76 @@
+#!/usr/bin/env python3
+"""Runs `vibtherm table` on every malformed input in tests/bad/ and on a few bad option
+values, and checks the promise of design.md section 7: exit status 2, exactly one error
+line on stderr (the one in NAME.expected), and no output file.
+
+Usage: run_bad_inputs.py VIBTHERM_EXECUTABLE [TESTS_BAD_DIR]
+
+Each input tests/bad/NAME.EXT has tests/bad/NAME.expected holding the exact stderr line.
+The runner works inside tests/bad and passes bare file names, so the expected lines do
+not depend on where the repository is checked out.
+"""
+import os
+import pathlib
+import subprocess
+import sys
+import tempfile
+
+# Bad option values, run on a good input: (arguments after `table`, expected stderr line).
+ARGUMENT_CASES = [
+    (["../data/water.yaml", "--temps", "0,300"],
+     "error: temperature list '0,300': temperatures must be positive, got 0 K"),
+    (["../data/water.yaml", "--pressure", "-1bar"],
+     "error: --pressure '-1bar': expected a positive pressure such as 1bar, 1atm or 101325Pa"),
+    (["../data/water.yaml", "--pressure", "0 atm"],
+     "error: --pressure '0 atm': expected a positive pressure such as 1bar, 1atm or 101325Pa"),
+    (["does-not-exist.yaml"],
+     "does-not-exist.yaml: error: cannot read file (missing or not readable), expected a species file"),
+]
+
+
+def run_case(exe, bad_dir, args, expected, label, failures):
+    with tempfile.TemporaryDirectory() as tmp:
+        out = os.path.join(tmp, "out.txt")
+        result = subprocess.run([exe, "table", *args, "-o", out], cwd=bad_dir, capture_output=True,
+                                text=True, errors="replace", timeout=60)
+        problems = []
+        if result.returncode != 2:
+            problems.append(f"exit status {result.returncode}, expected 2")
+        lines = [line for line in result.stderr.splitlines() if line.strip()]
+        if lines != [expected]:
+            problems.append(f"stderr {lines!r}, expected [{expected!r}]")
+        left = os.listdir(tmp)
+        if left:
+            problems.append(f"files written: {left}")
+        if problems:
+            failures.append(f"{label}: " + "; ".join(problems))
+
+
+def main():
+    if len(sys.argv) not in (2, 3):
+        sys.exit(__doc__)
+    exe = os.path.abspath(sys.argv[1])
+    bad_dir = pathlib.Path(sys.argv[2] if len(sys.argv) == 3 else pathlib.Path(__file__).parent.parent / "bad")
+    failures = []
+    inputs = sorted(p for p in bad_dir.iterdir() if p.suffix != ".expected")
+    expected_files = {p.stem for p in bad_dir.glob("*.expected")}
+    for stem in sorted(expected_files - {p.stem for p in inputs}):
+        failures.append(f"{stem}.expected has no input file")
+    for path in inputs:
+        expected_path = path.with_suffix(".expected")
+        if not expected_path.exists():
+            failures.append(f"{path.name}: no {expected_path.name}")
+            continue
+        expected = expected_path.read_text(encoding="utf-8").strip()
+        run_case(exe, bad_dir, [path.name], expected, path.name, failures)
+    for args, expected in ARGUMENT_CASES:
+        run_case(exe, bad_dir, args, expected, " ".join(args), failures)
+    total = len(inputs) + len(ARGUMENT_CASES)
+    for f in failures:
+        print("FAIL", f)
+    print(f"{total - len(failures)} of {total} bad-input cases behave as expected")
+    sys.exit(1 if failures else 0)
+
+
+if __name__ == "__main__":
+    main()
