@@ -47,8 +47,8 @@ MotionTerms translation_terms(double mass_amu, double T_K, double pressure_Pa) {
 }
 
 MotionTerms translation_terms_concentration(double mass_amu, double T_K, double concentration_mol_per_m3) {
-  return translation_from_ln_q(ln_translational_q_per_molecule(
-      mass_amu, T_K, 1.0 / (concentration_mol_per_m3 * c::avogadro_per_mol)));
+  return translation_from_ln_q(
+      ln_translational_q_per_molecule(mass_amu, T_K, 1.0 / (concentration_mol_per_m3 * c::avogadro_per_mol)));
 }
 
 MotionTerms rigid_rotor_terms(std::span<const double> rotational_temperatures_K, int symmetry_number,

@@ -49,8 +49,8 @@ std::vector<double> temperatures_or(const CommonOptions& options, const std::vec
 std::vector<double> default_table_temperatures();
 
 struct Batch {
-  std::vector<PreparedSpecies> species;   // in input order
-  std::vector<std::string> failures;      // formatted one-line errors (only with --keep-going)
+  std::vector<PreparedSpecies> species;  // in input order
+  std::vector<std::string> failures;     // formatted one-line errors (only with --keep-going)
 };
 
 // Expands paths, reads and prepares every species. Without --keep-going the first error
