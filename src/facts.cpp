@@ -49,8 +49,8 @@ SpeciesFacts describe_species(const PreparedSpecies& p) {
   f.atom_count = atom_count(p.species);
   f.expected_modes = expected_vibration_count(p.species, p.rotor.type);
   f.given_modes = static_cast<int>(p.species.frequencies_cm1.size());
-  f.imaginary_modes = static_cast<int>(
-      std::count_if(p.species.frequencies_cm1.begin(), p.species.frequencies_cm1.end(), [](double v) { return v < 0; }));
+  f.imaginary_modes = static_cast<int>(std::count_if(
+      p.species.frequencies_cm1.begin(), p.species.frequencies_cm1.end(), [](double v) { return v < 0; }));
   f.frequencies_cm1 = p.used_frequencies_cm1;
   f.zero_point_energy_J_per_mol = p.zero_point_energy_J_per_mol;
   f.phase = p.is_gas ? "gas" : "adsorbate";

@@ -1,9 +1,10 @@
 #include "vibtherm/geometry.hpp"
 
+#include <fmt/format.h>
+
 #include <Eigen/Eigenvalues>
 #include <algorithm>
 #include <cmath>
-#include <fmt/format.h>
 
 #include "vibtherm/constants.hpp"
 
@@ -13,9 +14,12 @@ namespace c = constants;
 
 const char* rotor_type_name(RotorType type) {
   switch (type) {
-    case RotorType::atom: return "atom";
-    case RotorType::linear: return "linear";
-    case RotorType::nonlinear: return "nonlinear";
+    case RotorType::atom:
+      return "atom";
+    case RotorType::linear:
+      return "linear";
+    case RotorType::nonlinear:
+      return "nonlinear";
   }
   return "unknown";
 }
@@ -80,16 +84,18 @@ RotorAnalysis analyse_rotor(const Species& species, double linear_tolerance_amu_
   RotorAnalysis rotor;
   rotor.mass_amu = total_mass_amu(species);
   if (species.atoms.empty()) {
-    if (!species.rotor_data) fail(species.origin, "species '" + species.name + "' has neither atoms nor rigid-rotor data");
+    if (!species.rotor_data)
+      fail(species.origin, "species '" + species.name + "' has neither atoms nor rigid-rotor data");
     const auto& data = *species.rotor_data;
     std::vector<double> moments = data.moments_amu_A2;
     std::sort(moments.begin(), moments.end());
     if (moments.empty()) {
       rotor.type = RotorType::atom;
     } else if (data.linear) {
-      if (moments.size() != 1 && !(moments.size() == 2 && std::abs(moments[0] - moments[1]) <= 1e-6 * moments[1]))
-        fail(species.origin, fmt::format("linear species '{}' needs one moment of inertia, got {}", species.name,
-                                         moments.size()));
+      if (moments.size() != 1 &&
+          !(moments.size() == 2 && std::abs(moments[0] - moments[1]) <= 1e-6 * moments[1]))
+        fail(species.origin, fmt::format("linear species '{}' needs one moment of inertia, got {}",
+                                         species.name, moments.size()));
       rotor.type = RotorType::linear;
       rotor.moments_amu_A2 = {0.0, moments.back(), moments.back()};
       rotor.rotational_moments_amu_A2 = {moments.back()};
@@ -115,8 +121,11 @@ RotorAnalysis analyse_rotor(const Species& species, double linear_tolerance_amu_
   rotor.type = classify(rotor.moments_amu_A2, linear_tolerance_amu_A2);
   if (species.atoms.size() == 1) rotor.type = RotorType::atom;
   switch (rotor.type) {
-    case RotorType::atom: break;
-    case RotorType::linear: rotor.rotational_moments_amu_A2 = {rotor.moments_amu_A2[2]}; break;
+    case RotorType::atom:
+      break;
+    case RotorType::linear:
+      rotor.rotational_moments_amu_A2 = {rotor.moments_amu_A2[2]};
+      break;
     case RotorType::nonlinear:
       rotor.rotational_moments_amu_A2.assign(rotor.moments_amu_A2.begin(), rotor.moments_amu_A2.end());
       break;
@@ -130,9 +139,12 @@ int expected_vibration_count(const Species& species, RotorType type) {
   if (n < 0) return -1;
   if (species.phase == Phase::adsorbate) return 3 * n;
   switch (type) {
-    case RotorType::atom: return 0;
-    case RotorType::linear: return 3 * n - 5;
-    case RotorType::nonlinear: return 3 * n - 6;
+    case RotorType::atom:
+      return 0;
+    case RotorType::linear:
+      return 3 * n - 5;
+    case RotorType::nonlinear:
+      return 3 * n - 6;
   }
   return -1;
 }

@@ -47,8 +47,8 @@ MotionTerms translation_terms(double mass_amu, double T_K, double pressure_Pa) {
 }
 
 MotionTerms translation_terms_concentration(double mass_amu, double T_K, double concentration_mol_per_m3) {
-  return translation_from_ln_q(ln_translational_q_per_molecule(
-      mass_amu, T_K, 1.0 / (concentration_mol_per_m3 * c::avogadro_per_mol)));
+  return translation_from_ln_q(
+      ln_translational_q_per_molecule(mass_amu, T_K, 1.0 / (concentration_mol_per_m3 * c::avogadro_per_mol)));
 }
 
 MotionTerms rigid_rotor_terms(std::span<const double> rotational_temperatures_K, int symmetry_number,
@@ -82,12 +82,13 @@ MotionTerms harmonic_oscillator_terms(double wavenumber_cm1, double T_K) {
   const double x = characteristic_temperature_K(wavenumber_cm1) / T_K;
   // Past x ≈ 700, e^{-x} underflows: the mode is frozen and contributes nothing.
   if (x > 700.0) return v;
-  const double em1 = std::expm1(x);        // eˣ − 1, accurate for small x
-  const double one_minus_e = -std::expm1(-x);  // 1 − e^{−x}
+  // Written with e^{−x} and 1 − e^{−x} (expm1: accurate for small x) so that neither
+  // overflows: x/(eˣ−1) = x e^{−x}/(1−e^{−x}), x² eˣ/(eˣ−1)² = x² e^{−x}/(1−e^{−x})².
+  const double e = std::exp(-x);
+  const double one_minus_e = -std::expm1(-x);
   v.ln_q = -std::log(one_minus_e);
-  v.U_over_RT = v.H_over_RT = x / em1;
-  // x² eˣ/(eˣ−1)² written as (x/(eˣ−1))² · eˣ; for large x use x² e^{−x}/(1−e^{−x})².
-  v.Cv_over_R = v.Cp_over_R = x * x * std::exp(-x) / (one_minus_e * one_minus_e);
+  v.U_over_RT = v.H_over_RT = x * e / one_minus_e;
+  v.Cv_over_R = v.Cp_over_R = x * x * e / (one_minus_e * one_minus_e);
   v.S_over_R = v.U_over_RT + v.ln_q;
   return v;
 }

@@ -1,8 +1,9 @@
 #include "vibtherm/temperatures.hpp"
 
+#include <fmt/format.h>
+
 #include <charconv>
 #include <cmath>
-#include <fmt/format.h>
 #include <string>
 
 #include "vibtherm/error.hpp"
@@ -18,8 +19,9 @@ double parse_number(std::string_view text, std::string_view whole) {
   double value = 0.0;
   const auto [end, ec] = std::from_chars(text.data(), text.data() + text.size(), value);
   if (text.empty() || ec != std::errc() || end != text.data() + text.size() || !std::isfinite(value))
-    fail({}, fmt::format("temperature list '{}': '{}' is not a number; expected e.g. 298.15,500 or 300:3000:100",
-                         whole, text));
+    fail({},
+         fmt::format("temperature list '{}': '{}' is not a number; expected e.g. 298.15,500 or 300:3000:100",
+                     whole, text));
   return value;
 }
 

@@ -1,8 +1,9 @@
 #include "vibtherm/thermo.hpp"
 
+#include <fmt/format.h>
+
 #include <algorithm>
 #include <cmath>
-#include <fmt/format.h>
 
 namespace vibtherm {
 
@@ -19,9 +20,12 @@ std::string join_wavenumbers(const std::vector<double>& values) {
 std::string count_rule(const Species& species, RotorType type) {
   if (species.phase == Phase::adsorbate) return "3N for an adsorbate";
   switch (type) {
-    case RotorType::atom: return "none for an atom";
-    case RotorType::linear: return "3N-5 for a linear molecule";
-    case RotorType::nonlinear: return "3N-6 for a nonlinear molecule";
+    case RotorType::atom:
+      return "none for an atom";
+    case RotorType::linear:
+      return "3N-5 for a linear molecule";
+    case RotorType::nonlinear:
+      return "3N-6 for a nonlinear molecule";
   }
   return "";
 }
@@ -42,9 +46,10 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
     // The reaction coordinate is the imaginary mode of largest magnitude.
     auto it = std::min_element(scaled.begin(), scaled.end());
     drop_index = static_cast<int>(it - scaled.begin());
-    p.notes.push_back(fmt::format("transition state: the imaginary mode {:.1f}i cm^-1 is the reaction "
-                                  "coordinate and is left out of the partition function",
-                                  std::abs(*it)));
+    p.notes.push_back(
+        fmt::format("transition state: the imaginary mode {:.1f}i cm^-1 is the reaction "
+                    "coordinate and is left out of the partition function",
+                    std::abs(*it)));
   }
   std::vector<double> rejected;
   for (size_t i = 0; i < scaled.size(); ++i) {
@@ -54,8 +59,8 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
     if (v > 0.0) {
       p.vibrations_cm1.push_back(v);
     } else if (v < 0.0 && -v < p.options.imaginary_as_real_below_cm1) {
-      p.warnings.push_back(fmt::format("imaginary frequency {:.1f}i cm^-1 treated as a real mode of {:.1f} cm^-1",
-                                       -v, -v));
+      p.warnings.push_back(
+          fmt::format("imaginary frequency {:.1f}i cm^-1 treated as a real mode of {:.1f} cm^-1", -v, -v));
       p.vibrations_cm1.push_back(-v);
       p.used_frequencies_cm1.back() = -v;
     } else if (v < 0.0) {
@@ -73,46 +78,6 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
                      "--imaginary-as-real-below)",
                      p.species.name, join_wavenumbers(rejected)));
 }
-
-}  // namespace
-
-PreparedSpecies prepare_species(const Species& species, const ModelOptions& options) {
-  PreparedSpecies p;
-  p.species = species;
-  p.options = options;
-  p.is_gas = species.phase == Phase::gas;
-  if (!(options.frequency_scale > 0.0) || !std::isfinite(options.frequency_scale))
-    fail({}, fmt::format("frequency scale factor must be positive, got {}", options.frequency_scale));
-  if (p.is_gas && !(options.pressure_Pa > 0.0 && std::isfinite(options.pressure_Pa)))
-    fail({}, fmt::format("pressure must be positive, got {} Pa", options.pressure_Pa));
-  if (species.symmetry_number < 1)
-    fail(species.origin, fmt::format("symmetry number must be a positive integer, got {}", species.symmetry_number));
-  p.rotor = analyse_rotor(species, options.linear_tolerance_amu_A2);
-
-  std::vector<double> scaled;
-  for (double v : species.frequencies_cm1) scaled.push_back(v * options.frequency_scale);
-  if (options.frequency_scale != 1.0)
-    p.notes.push_back(fmt::format("wavenumbers scaled by {}", options.frequency_scale));
-
-  const int expected = expected_vibration_count(species, p.rotor.type);
-  const int given = static_cast<int>(species.frequencies_cm1.size());
-  if (expected >= 0 && given != expected) {
-    const std::string message =
-        fmt::format("species '{}' has {} vibrational frequencies, expected {} ({}, N = {})", species.name, given,
-                    expected, count_rule(species, p.rotor.type), atom_count(species));
-    if (!options.mode_count_mismatch_is_warning) fail(species.origin, message + "; --allow-mode-count-mismatch accepts it");
-    p.warnings.push_back(message);
-  }
-  apply_imaginary_policy(p, scaled);
-
-  double sum_cm1 = 0.0;
-  for (double v : p.vibrations_cm1) sum_cm1 += v;
-  p.zero_point_energy_J_per_mol = 0.5 * sum_cm1 * c::wavenumber_J_per_mol;
-  if (!p.is_gas) p.notes.push_back("adsorbate: all 3N motions treated as harmonic vibrations");
-  return p;
-}
-
-namespace {
 
 // Thermal functions at T without the H(298.15) reference.
 ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
@@ -141,17 +106,57 @@ ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
 
 }  // namespace
 
+PreparedSpecies prepare_species(const Species& species, const ModelOptions& options) {
+  PreparedSpecies p;
+  p.species = species;
+  p.options = options;
+  p.is_gas = species.phase == Phase::gas;
+  if (!(options.frequency_scale > 0.0) || !std::isfinite(options.frequency_scale))
+    fail({}, fmt::format("frequency scale factor must be positive, got {}", options.frequency_scale));
+  if (p.is_gas && !(options.pressure_Pa > 0.0 && std::isfinite(options.pressure_Pa)))
+    fail({}, fmt::format("pressure must be positive, got {} Pa", options.pressure_Pa));
+  if (species.symmetry_number < 1)
+    fail(species.origin,
+         fmt::format("symmetry number must be a positive integer, got {}", species.symmetry_number));
+  p.rotor = analyse_rotor(species, options.linear_tolerance_amu_A2);
+
+  std::vector<double> scaled;
+  for (double v : species.frequencies_cm1) scaled.push_back(v * options.frequency_scale);
+  if (options.frequency_scale != 1.0)
+    p.notes.push_back(fmt::format("wavenumbers scaled by {}", options.frequency_scale));
+
+  const int expected = expected_vibration_count(species, p.rotor.type);
+  const int given = static_cast<int>(species.frequencies_cm1.size());
+  if (expected >= 0 && given != expected) {
+    const std::string message =
+        fmt::format("species '{}' has {} vibrational frequencies, expected {} ({}, N = {})", species.name,
+                    given, expected, count_rule(species, p.rotor.type), atom_count(species));
+    if (!options.mode_count_mismatch_is_warning)
+      fail(species.origin, message + "; --allow-mode-count-mismatch accepts it");
+    p.warnings.push_back(message);
+  }
+  apply_imaginary_policy(p, scaled);
+
+  double sum_cm1 = 0.0;
+  for (double v : p.vibrations_cm1) sum_cm1 += v;
+  p.zero_point_energy_J_per_mol = 0.5 * sum_cm1 * c::wavenumber_J_per_mol;
+  if (!p.is_gas) p.notes.push_back("adsorbate: all 3N motions treated as harmonic vibrations");
+  p.H298_minus_H0_J_per_mol = evaluate_terms(p, c::reference_temperature_K).H_minus_H0_J_per_mol;
+  return p;
+}
+
 ThermoPoint evaluate(const PreparedSpecies& prepared, double T_K) {
-  if (!(T_K > 0.0) || !std::isfinite(T_K)) fail({}, fmt::format("temperature must be positive, got {} K", T_K));
+  if (!(T_K > 0.0) || !std::isfinite(T_K))
+    fail({}, fmt::format("temperature must be positive, got {} K", T_K));
   ThermoPoint point = evaluate_terms(prepared, T_K);
-  const double h298_minus_h0 = evaluate_terms(prepared, c::reference_temperature_K).H_minus_H0_J_per_mol;
-  point.H_minus_H298_J_per_mol = point.H_minus_H0_J_per_mol - h298_minus_h0;
+  point.H_minus_H298_J_per_mol = point.H_minus_H0_J_per_mol - prepared.H298_minus_H0_J_per_mol;
   point.G_minus_H298_J_per_mol = point.H_minus_H298_J_per_mol - T_K * point.S_J_per_mol_K;
   point.gibbs_function_J_per_mol_K = -point.G_minus_H298_J_per_mol / T_K;
   return point;
 }
 
-std::vector<ThermoPoint> tabulate(const PreparedSpecies& prepared, const std::vector<double>& temperatures_K) {
+std::vector<ThermoPoint> tabulate(const PreparedSpecies& prepared,
+                                  const std::vector<double>& temperatures_K) {
   std::vector<ThermoPoint> rows;
   rows.reserve(temperatures_K.size());
   for (double T : temperatures_K) rows.push_back(evaluate(prepared, T));

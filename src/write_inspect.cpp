@@ -34,13 +34,16 @@ std::string inspect_text(const std::vector<SpeciesFacts>& all) {
     const auto& f = all[k];
     if (k > 0) out += '\n';
     out += fmt::format("== {} ==\n", f.name);
-    auto line = [&](const char* label, const std::string& value) { out += fmt::format("  {:<20}{}\n", label, value); };
+    auto line = [&](const char* label, const std::string& value) {
+      out += fmt::format("  {:<20}{}\n", label, value);
+    };
     line("formula", f.formula.empty() ? "-" : f.formula);
     line("phase", f.phase);
-    line("mass", fmt::format("{:.6f} amu (isotopic){}", f.mass_amu,
-                             f.molar_mass_g_per_mol > 0 ? fmt::format(", {:.4f} g/mol (standard atomic weights)",
-                                                                      f.molar_mass_g_per_mol)
-                                                        : std::string()));
+    line("mass",
+         fmt::format("{:.6f} amu (isotopic){}", f.mass_amu,
+                     f.molar_mass_g_per_mol > 0
+                         ? fmt::format(", {:.4f} g/mol (standard atomic weights)", f.molar_mass_g_per_mol)
+                         : std::string()));
     line("rotor", rotor_type_name(f.rotor));
     line("moments", fmt::format("{:.5f}  {:.5f}  {:.5f} amu A^2", f.moments_amu_A2[0], f.moments_amu_A2[1],
                                 f.moments_amu_A2[2]));
@@ -49,8 +52,8 @@ std::string inspect_text(const std::vector<SpeciesFacts>& all) {
     line("rot. temperatures", numbers(f.rotational_temperatures_K, "{:.4f}") + " K");
     line("symmetry number", std::to_string(f.symmetry_number));
     line("ground degeneracy", std::to_string(f.ground_degeneracy));
-    line("modes", fmt::format("{} given, {} expected for N = {}, {} imaginary", f.given_modes, f.expected_modes,
-                              f.atom_count, f.imaginary_modes));
+    line("modes", fmt::format("{} given, {} expected for N = {}, {} imaginary", f.given_modes,
+                              f.expected_modes, f.atom_count, f.imaginary_modes));
     line("frequencies", wavenumbers(f.frequencies_cm1) + (f.frequencies_cm1.empty() ? "" : " cm^-1"));
     line("zero-point energy", fmt::format("{:.4f} kJ/mol", f.zero_point_energy_J_per_mol / 1e3));
     for (const auto& w : f.warnings) line("warning", w);
@@ -61,13 +64,15 @@ std::string inspect_text(const std::vector<SpeciesFacts>& all) {
 
 std::string inspect_csv(const std::vector<SpeciesFacts>& all) {
   std::string out =
-      "species,formula,phase,rotor,mass_amu,molar_mass_g_per_mol,Ia_amu_A2,Ib_amu_A2,Ic_amu_A2,symmetry_number,"
+      "species,formula,phase,rotor,mass_amu,molar_mass_g_per_mol,Ia_amu_A2,Ib_amu_A2,Ic_amu_A2,symmetry_"
+      "number,"
       "atoms,modes_given,modes_expected,imaginary,zpe_kJ_per_mol\n";
   for (const auto& f : all) {
-    out += fmt::format("{},{},{},{},{:.6f},{:.4f},{:.6f},{:.6f},{:.6f},{},{},{},{},{},{:.6f}\n", f.name, f.formula, f.phase,
-                       rotor_type_name(f.rotor), f.mass_amu, f.molar_mass_g_per_mol, f.moments_amu_A2[0],
-                       f.moments_amu_A2[1], f.moments_amu_A2[2], f.symmetry_number, f.atom_count, f.given_modes,
-                       f.expected_modes, f.imaginary_modes, f.zero_point_energy_J_per_mol / 1e3);
+    out += fmt::format("{},{},{},{},{:.6f},{:.4f},{:.6f},{:.6f},{:.6f},{},{},{},{},{},{:.6f}\n", f.name,
+                       f.formula, f.phase, rotor_type_name(f.rotor), f.mass_amu, f.molar_mass_g_per_mol,
+                       f.moments_amu_A2[0], f.moments_amu_A2[1], f.moments_amu_A2[2], f.symmetry_number,
+                       f.atom_count, f.given_modes, f.expected_modes, f.imaginary_modes,
+                       f.zero_point_energy_J_per_mol / 1e3);
   }
   return out;
 }
@@ -91,7 +96,9 @@ std::string inspect_json(const std::vector<SpeciesFacts>& all) {
     s["rotational_constants_GHz"] = f.rotational_constants_GHz;
     s["rotational_temperatures_K"] = f.rotational_temperatures_K;
     s["ground_degeneracy"] = f.ground_degeneracy;
-    s["mode_counts"] = {{"given", f.given_modes}, {"expected", f.expected_modes}, {"imaginary", f.imaginary_modes},
+    s["mode_counts"] = {{"given", f.given_modes},
+                        {"expected", f.expected_modes},
+                        {"imaginary", f.imaginary_modes},
                         {"atoms", f.atom_count}};
     s["warnings"] = f.warnings;
     s["notes"] = f.notes;

@@ -57,7 +57,8 @@ std::string table_text(const std::vector<SpeciesTable>& tables, const TableWrite
       if (model) line += fmt::format(" {:>9.3f}", r.Cv_J_per_mol_K);
       line += fmt::format(" {:>9.3f} {:>10.3f}", r.S_J_per_mol_K, r.H_minus_H298_J_per_mol / 1e3);
       if (model) line += fmt::format(" {:>9.3f}", r.H_minus_H0_J_per_mol / 1e3);
-      line += fmt::format(" {:>10.3f} {:>11.3f}", r.G_minus_H298_J_per_mol / 1e3, r.gibbs_function_J_per_mol_K);
+      line +=
+          fmt::format(" {:>10.3f} {:>11.3f}", r.G_minus_H298_J_per_mol / 1e3, r.gibbs_function_J_per_mol_K);
       if (breakdown)
         for (const auto& m : motions)
           line += fmt::format(" {:>8.3f} {:>8.3f}", (r.*m.terms).Cp_over_R * R, (r.*m.terms).S_over_R * R);
@@ -73,7 +74,8 @@ std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteO
       "species,T_K,Cp_J_per_mol_K,Cv_J_per_mol_K,S_J_per_mol_K,H_minus_H298_kJ_per_mol,H_minus_H0_kJ_per_mol,"
       "G_minus_H298_kJ_per_mol,minus_G_minus_H298_over_T_J_per_mol_K";
   if (breakdown)
-    for (const auto& m : motions) out += fmt::format(",Cp_{0}_J_per_mol_K,S_{0}_J_per_mol_K,H_minus_H0_{0}_kJ_per_mol", m.name);
+    for (const auto& m : motions)
+      out += fmt::format(",Cp_{0}_J_per_mol_K,S_{0}_J_per_mol_K,H_minus_H0_{0}_kJ_per_mol", m.name);
   out += '\n';
   for (const auto& table : tables) {
     // Names are quoted when they hold a comma or quote (RFC 4180).
@@ -87,12 +89,14 @@ std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteO
       const bool model = table.has_model_columns;
       out += fmt::format("{},{},{:.6f},{},{:.6f},{:.6f},{},{:.6f},{:.6f}", name, r.T_K, r.Cp_J_per_mol_K,
                          model ? fmt::format("{:.6f}", r.Cv_J_per_mol_K) : "", r.S_J_per_mol_K,
-                         r.H_minus_H298_J_per_mol / 1e3, model ? fmt::format("{:.6f}", r.H_minus_H0_J_per_mol / 1e3) : "",
+                         r.H_minus_H298_J_per_mol / 1e3,
+                         model ? fmt::format("{:.6f}", r.H_minus_H0_J_per_mol / 1e3) : "",
                          r.G_minus_H298_J_per_mol / 1e3, r.gibbs_function_J_per_mol_K);
       if (breakdown)
         for (const auto& m : motions) {
           const MotionTerms& t = r.*m.terms;
-          out += model ? fmt::format(",{:.6f},{:.6f},{:.6f}", t.Cp_over_R * R, t.S_over_R * R, t.H_over_RT * R * r.T_K / 1e3)
+          out += model ? fmt::format(",{:.6f},{:.6f},{:.6f}", t.Cp_over_R * R, t.S_over_R * R,
+                                     t.H_over_RT * R * r.T_K / 1e3)
                        : std::string(",,,");
         }
       out += '\n';

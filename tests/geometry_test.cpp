@@ -41,11 +41,14 @@ TEST_CASE("moments are invariant under rotation, translation and atom order") {
   const Species base = test::water();
   const auto reference = analyse_rotor(base);
   Species moved = base;
-  const Eigen::Matrix3d rot = (Eigen::AngleAxisd(0.7, Eigen::Vector3d(1, 2, 3).normalized())).toRotationMatrix();
-  for (auto& a : moved.atoms) a.position_angstrom = rot * a.position_angstrom + Eigen::Vector3d(5.0, -3.0, 11.0);
+  const Eigen::Matrix3d rot =
+      (Eigen::AngleAxisd(0.7, Eigen::Vector3d(1, 2, 3).normalized())).toRotationMatrix();
+  for (auto& a : moved.atoms)
+    a.position_angstrom = rot * a.position_angstrom + Eigen::Vector3d(5.0, -3.0, 11.0);
   std::swap(moved.atoms[0], moved.atoms[2]);
   const auto other = analyse_rotor(moved);
-  for (int i = 0; i < 3; ++i) CHECK(other.moments_amu_A2[i] == doctest::Approx(reference.moments_amu_A2[i]).epsilon(1e-12));
+  for (int i = 0; i < 3; ++i)
+    CHECK(other.moments_amu_A2[i] == doctest::Approx(reference.moments_amu_A2[i]).epsilon(1e-12));
 }
 
 TEST_CASE("rigid-rotor data instead of atoms") {

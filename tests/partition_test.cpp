@@ -35,10 +35,12 @@ TEST_CASE("Cv is the temperature derivative of U (numerical check)") {
   const double h = 1e-3;
   for (double T : {50.0, 300.0, 2000.0}) {
     auto u = [&](double t) { return harmonic_oscillator_terms(800.0, t).U_over_RT * t; };
-    CHECK(harmonic_oscillator_terms(800.0, T).Cv_over_R == doctest::Approx((u(T + h) - u(T - h)) / (2 * h)).epsilon(1e-6));
+    CHECK(harmonic_oscillator_terms(800.0, T).Cv_over_R ==
+          doctest::Approx((u(T + h) - u(T - h)) / (2 * h)).epsilon(1e-6));
     const std::vector<ElectronicLevel> levels{{0.0, 2}, {139.7, 2}};
     auto ue = [&](double t) { return electronic_terms(levels, t).U_over_RT * t; };
-    CHECK(electronic_terms(levels, T).Cv_over_R == doctest::Approx((ue(T + h) - ue(T - h)) / (2 * h)).epsilon(1e-6));
+    CHECK(electronic_terms(levels, T).Cv_over_R ==
+          doctest::Approx((ue(T + h) - ue(T - h)) / (2 * h)).epsilon(1e-6));
   }
 }
 
@@ -55,7 +57,8 @@ TEST_CASE("translation: Sackur–Tetrode") {
   CHECK((t.S_over_R - t_atm.S_over_R) == doctest::Approx(std::log(1.01325)).epsilon(1e-12));
   // 1 mol/L equals the pressure c R T (ideal-gas law).
   const auto t_molar = translation_terms_concentration(39.9623831237, 298.15, 1000.0);
-  const auto t_cRT = translation_terms(39.9623831237, 298.15, 1000.0 * constants::gas_constant_J_per_mol_K * 298.15);
+  const auto t_cRT =
+      translation_terms(39.9623831237, 298.15, 1000.0 * constants::gas_constant_J_per_mol_K * 298.15);
   CHECK(t_molar.S_over_R == doctest::Approx(t_cRT.S_over_R).epsilon(1e-12));
 }
 

@@ -16,7 +16,8 @@ TEST_CASE("argon against CODATA") {
   // S°(298.15 K, 1 bar) = 154.846 ± 0.003 J/(mol K) (CODATA Key Values, Cox, Wagman & Medvedev 1989).
   CHECK(row.S_J_per_mol_K == doctest::Approx(154.846).epsilon(0.01 / 154.846));
   // Monatomic ideal gas (common practice): Cp = 5/2 R exactly, at every temperature.
-  for (double T : {200.0, 298.15, 6000.0}) CHECK(evaluate(p, T).Cp_J_per_mol_K == doctest::Approx(2.5 * R).epsilon(1e-15));
+  for (double T : {200.0, 298.15, 6000.0})
+    CHECK(evaluate(p, T).Cp_J_per_mol_K == doctest::Approx(2.5 * R).epsilon(1e-15));
   CHECK(row.H_minus_H298_J_per_mol == doctest::Approx(0.0));
   // H(T) − H(0) = 5/2 RT for a monatomic gas (common practice).
   CHECK(row.H_minus_H0_J_per_mol == doctest::Approx(2.5 * R * 298.15));
@@ -67,7 +68,8 @@ TEST_CASE("invariance under rigid motion and atom order") {
   // Rigid-body invariance (common practice).
   const auto ref = evaluate(prepare_species(test::water()), 1000.0);
   Species moved = test::water();
-  const Eigen::Matrix3d rot = Eigen::AngleAxisd(2.1, Eigen::Vector3d(0.3, -1, 0.2).normalized()).toRotationMatrix();
+  const Eigen::Matrix3d rot =
+      Eigen::AngleAxisd(2.1, Eigen::Vector3d(0.3, -1, 0.2).normalized()).toRotationMatrix();
   for (auto& a : moved.atoms) a.position_angstrom = rot * a.position_angstrom + Eigen::Vector3d(-7, 2, 0.5);
   std::swap(moved.atoms[0], moved.atoms[1]);
   const auto row = evaluate(prepare_species(moved), 1000.0);
@@ -105,7 +107,8 @@ TEST_CASE("imaginary frequencies and mode counts") {
 TEST_CASE("zero-point energy and scaling") {
   // ZPE = ½ Σ h c ν̃ N_A (harmonic oscillator, textbook identity).
   const auto p = prepare_species(test::water());
-  CHECK(p.zero_point_energy_J_per_mol == doctest::Approx(0.5 * (3657.0 + 1595.0 + 3756.0) * 11.962656).epsilon(1e-6));
+  CHECK(p.zero_point_energy_J_per_mol ==
+        doctest::Approx(0.5 * (3657.0 + 1595.0 + 3756.0) * 11.962656).epsilon(1e-6));
   ModelOptions options;
   options.frequency_scale = 0.5;
   CHECK(prepare_species(test::water(), options).zero_point_energy_J_per_mol ==

@@ -64,9 +64,9 @@ int main(int argc, char** argv) {
       const bool ok = std::abs(diff) <= tolerance;
       ++cases;
       if (!ok) ++failures;
-      fmt::print("{:<8} {:<10} {:>8.2f} {:>11.4f} {:>11.4f} {:>+9.4f} {:>7.3f}  {:<4} {}\n", prepared.species.name,
-                 f[1] + " " + (f[5] == "kJ/mol" ? "kJ" : "J/K"), T, ours, published, diff, tolerance,
-                 ok ? "ok" : "FAIL", f[6]);
+      fmt::print("{:<8} {:<10} {:>8.2f} {:>11.4f} {:>11.4f} {:>+9.4f} {:>7.3f}  {:<4} {}\n",
+                 prepared.species.name, f[1] + " " + (f[5] == "kJ/mol" ? "kJ" : "J/K"), T, ours, published,
+                 diff, tolerance, ok ? "ok" : "FAIL", f[6]);
     } catch (const std::exception& e) {
       std::fprintf(stderr, "%s\n", e.what());
       return 2;

@@ -11,8 +11,8 @@ namespace vibtherm {
 
 struct SpeciesFacts {
   std::string name;
-  std::string formula;             // Hill order, e.g. "CH4O"; empty when unknown
-  double mass_amu = 0.0;           // isotopic mass used by the model
+  std::string formula;                // Hill order, e.g. "CH4O"; empty when unknown
+  double mass_amu = 0.0;              // isotopic mass used by the model
   double molar_mass_g_per_mol = 0.0;  // from standard atomic weights (0 when unknown)
   RotorType rotor = RotorType::atom;
   std::array<double, 3> moments_amu_A2{};

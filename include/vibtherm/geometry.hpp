@@ -23,7 +23,7 @@ struct RotorAnalysis {
   RotorType type = RotorType::atom;
   double mass_amu = 0.0;
   Eigen::Vector3d centre_of_mass_angstrom = Eigen::Vector3d::Zero();
-  std::array<double, 3> moments_amu_A2{};       // ascending
+  std::array<double, 3> moments_amu_A2{};                        // ascending
   Eigen::Matrix3d principal_axes = Eigen::Matrix3d::Identity();  // columns, same order
   // The moments that count for rotation: none (atom), one (linear), three (nonlinear).
   std::vector<double> rotational_moments_amu_A2;

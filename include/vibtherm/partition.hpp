@@ -11,11 +11,11 @@
 namespace vibtherm {
 
 struct MotionTerms {
-  double ln_q = 0.0;            // ln of the (molecular) partition function
-  double U_over_RT = 0.0;       // [U(T) - U(0)] / RT
-  double H_over_RT = 0.0;       // [H(T) - H(0)] / RT; differs from U only for translation (+1)
+  double ln_q = 0.0;       // ln of the (molecular) partition function
+  double U_over_RT = 0.0;  // [U(T) - U(0)] / RT
+  double H_over_RT = 0.0;  // [H(T) - H(0)] / RT; differs from U only for translation (+1)
   double Cv_over_R = 0.0;
-  double Cp_over_R = 0.0;       // differs from Cv only for translation (+1)
+  double Cp_over_R = 0.0;  // differs from Cv only for translation (+1)
   double S_over_R = 0.0;
 
   MotionTerms& operator+=(const MotionTerms& other);

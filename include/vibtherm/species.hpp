@@ -16,10 +16,10 @@ namespace vibtherm {
 enum class Phase { gas, adsorbate };
 
 struct Atom {
-  std::string symbol;        // element symbol, e.g. "C"
-  std::string isotope;       // isotope label as given ("D", "C13"); empty = most abundant
-  int mass_number = 0;       // mass number of the isotope used
-  double mass_amu = 0.0;     // mass of the isotope used
+  std::string symbol;     // element symbol, e.g. "C"
+  std::string isotope;    // isotope label as given ("D", "C13"); empty = most abundant
+  int mass_number = 0;    // mass number of the isotope used
+  double mass_amu = 0.0;  // mass of the isotope used
   Eigen::Vector3d position_angstrom = Eigen::Vector3d::Zero();
 };
 
@@ -37,11 +37,11 @@ struct RigidRotorData {
 
 struct Species {
   std::string name;
-  SourceLocation origin;                   // file the species came from
-  std::vector<Atom> atoms;                 // empty when `rotor_data` is used
+  SourceLocation origin;    // file the species came from
+  std::vector<Atom> atoms;  // empty when `rotor_data` is used
   std::optional<RigidRotorData> rotor_data;
-  std::map<std::string, int> formula;      // element -> count; from atoms or `formula`
-  std::vector<double> frequencies_cm1;     // as given; negative = imaginary
+  std::map<std::string, int> formula;   // element -> count; from atoms or `formula`
+  std::vector<double> frequencies_cm1;  // as given; negative = imaginary
   int symmetry_number = 1;
   std::vector<ElectronicLevel> electronic_levels{{0.0, 1}};
   std::optional<double> enthalpy_of_formation_J_per_mol;  // ΔfH°(298.15 K)

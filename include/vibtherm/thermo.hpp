@@ -17,9 +17,9 @@ enum class StandardState { bar, atm, molar };  // 1 bar (IUPAC default), 1 atm, 
 
 struct ModelOptions {
   StandardState standard_state = StandardState::bar;
-  double pressure_Pa = constants::bar_Pa;  // used for bar/atm; overrides if set explicitly
-  double frequency_scale = 1.0;            // multiplies every wavenumber
-  bool transition_state = false;           // drop one imaginary mode as reaction coordinate
+  double pressure_Pa = constants::bar_Pa;    // used for bar/atm; overrides if set explicitly
+  double frequency_scale = 1.0;              // multiplies every wavenumber
+  bool transition_state = false;             // drop one imaginary mode as reaction coordinate
   double imaginary_as_real_below_cm1 = 0.0;  // |ν̃| below this: treated as real, with a warning
   bool mode_count_mismatch_is_warning = false;
   double linear_tolerance_amu_A2 = default_linear_tolerance_amu_A2;
@@ -30,11 +30,12 @@ struct PreparedSpecies {
   ModelOptions options;
   RotorAnalysis rotor;
   bool is_gas = true;
-  std::vector<double> vibrations_cm1;  // real wavenumbers used, scaled, input order
+  std::vector<double> vibrations_cm1;        // real wavenumbers used, scaled, input order
   std::vector<double> used_frequencies_cm1;  // as reported: includes a dropped reaction coordinate (negative)
   double zero_point_energy_J_per_mol = 0.0;
-  std::vector<std::string> warnings;  // things the user must see
-  std::vector<std::string> notes;     // model choices worth stating
+  double H298_minus_H0_J_per_mol = 0.0;  // thermal enthalpy at 298.15 K, the table's reference
+  std::vector<std::string> warnings;     // things the user must see
+  std::vector<std::string> notes;        // model choices worth stating
 };
 
 // Validates and prepares. Throws InputError (located at the species file) for imaginary
@@ -47,7 +48,7 @@ struct ThermoPoint {
   double Cv_J_per_mol_K = 0.0;
   double Cp_J_per_mol_K = 0.0;
   double S_J_per_mol_K = 0.0;
-  double H_minus_H0_J_per_mol = 0.0;    // thermal enthalpy above the 0 K (zero-point) level
+  double H_minus_H0_J_per_mol = 0.0;  // thermal enthalpy above the 0 K (zero-point) level
   double H_minus_H298_J_per_mol = 0.0;
   double G_minus_H298_J_per_mol = 0.0;
   double gibbs_function_J_per_mol_K = 0.0;  // −[G(T) − H(298.15 K)] / T

@@ -11,9 +11,9 @@ namespace vibtherm {
 
 struct SpeciesTable {
   std::string name;
-  std::string caption;              // one line shown above the text table (model summary)
+  std::string caption;  // one line shown above the text table (model summary)
   std::vector<ThermoPoint> rows;
-  bool has_model_columns = true;    // Cv, H−H0 and the per-motion breakdown are known
+  bool has_model_columns = true;  // Cv, H−H0 and the per-motion breakdown are known
 };
 
 struct TableWriteOptions {

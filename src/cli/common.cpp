@@ -16,21 +16,30 @@
 
 namespace vibtherm::cli {
 
-void add_common_options(CLI::App& sub, CommonOptions& o, bool with_temps, const std::vector<std::string>& formats) {
-  sub.add_option("files", o.inputs, "species files (.yaml, .yml, .xyz), directories of them, or manifests (.list)")
+void add_common_options(CLI::App& sub, CommonOptions& o, bool with_temps,
+                        const std::vector<std::string>& formats) {
+  sub.add_option("files", o.inputs,
+                 "species files (.yaml, .yml, .xyz), directories of them, or manifests (.list)")
       ->required();
   if (with_temps)
-    sub.add_option("--temps", o.temps_text, "temperatures in K: list '298.15,500' and/or ranges 'START:STOP:STEP'");
-  sub.add_option("--pressure", o.pressure_text, "pressure for translation, e.g. 1bar, 1atm, 101325Pa (default: the standard state)");
-  sub.add_option("--standard-state", o.standard_state, "standard state: bar (1 bar, IUPAC), atm (1 atm), molar (1 mol/L)")
+    sub.add_option("--temps", o.temps_text,
+                   "temperatures in K: list '298.15,500' and/or ranges 'START:STOP:STEP'");
+  sub.add_option("--pressure", o.pressure_text,
+                 "pressure for translation, e.g. 1bar, 1atm, 101325Pa (default: the standard state)");
+  sub.add_option("--standard-state", o.standard_state,
+                 "standard state: bar (1 bar, IUPAC), atm (1 atm), molar (1 mol/L)")
       ->check(CLI::IsMember({"bar", "atm", "molar"}));
   if (!formats.empty())
-    sub.add_option("--format", o.format, "output format")->check(CLI::IsMember(formats))->capture_default_str();
+    sub.add_option("--format", o.format, "output format")
+        ->check(CLI::IsMember(formats))
+        ->capture_default_str();
   sub.add_option("-o,--output", o.output, "output file ('-' = standard output)")->capture_default_str();
   sub.add_flag("--keep-going", o.keep_going, "finish the good species, list the failures, exit 1");
-  sub.add_option("--scale", o.frequency_scale, "multiply every wavenumber by this factor")->capture_default_str();
-  sub.add_flag("--transition-state", o.transition_state,
-               "treat every species as a transition state: drop one imaginary mode (the reaction coordinate)");
+  sub.add_option("--scale", o.frequency_scale, "multiply every wavenumber by this factor")
+      ->capture_default_str();
+  sub.add_flag(
+      "--transition-state", o.transition_state,
+      "treat every species as a transition state: drop one imaginary mode (the reaction coordinate)");
   sub.add_option("--imaginary-as-real-below", o.imaginary_as_real_below_cm1,
                  "treat imaginary wavenumbers smaller than this (cm^-1) as real, with a warning");
   sub.add_flag("--allow-mode-count-mismatch", o.mode_count_warning,

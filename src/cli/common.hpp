@@ -49,8 +49,8 @@ std::vector<double> temperatures_or(const CommonOptions& options, const std::vec
 std::vector<double> default_table_temperatures();
 
 struct Batch {
-  std::vector<PreparedSpecies> species;   // in input order
-  std::vector<std::string> failures;      // formatted one-line errors (only with --keep-going)
+  std::vector<PreparedSpecies> species;  // in input order
+  std::vector<std::string> failures;     // formatted one-line errors (only with --keep-going)
 };
 
 // Expands paths, reads and prepares every species. Without --keep-going the first error
@@ -69,5 +69,8 @@ int batch_status(const Batch& batch);
 // Each subcommand file provides one of these; main.cpp lists them in a table.
 void setup_inspect(CLI::App& sub);
 void setup_table(CLI::App& sub);
+void setup_fit(CLI::App& sub);
+void setup_eval(CLI::App& sub);
+void setup_modes(CLI::App& sub);
 
 }  // namespace vibtherm::cli

@@ -16,7 +16,9 @@ void setup_inspect(CLI::App& sub) {
     std::vector<SpeciesFacts> facts;
     for (const auto& p : batch.species) facts.push_back(describe_species(p));
     const std::string& f = options->format;
-    write_output(options->output, f == "json" ? inspect_json(facts) : f == "csv" ? inspect_csv(facts) : inspect_text(facts));
+    write_output(options->output, f == "json"  ? inspect_json(facts)
+                                  : f == "csv" ? inspect_csv(facts)
+                                               : inspect_text(facts));
     throw Exit{batch_status(batch)};
   });
 }

@@ -20,6 +20,11 @@ constexpr SubcommandEntry subcommands[] = {
     {"inspect", "derived facts: formula, mass, moments, rotor type, symmetry, ZPE, mode counts",
      vibtherm::cli::setup_inspect},
     {"table", "thermodynamic functions (Cp, S, H, G) versus temperature", vibtherm::cli::setup_table},
+    {"fit", "NASA-7 or NASA-9 polynomials by constrained least squares, with fit errors",
+     vibtherm::cli::setup_fit},
+    {"eval", "tabulate the species of an existing NASA-7 / NASA-9 file", vibtherm::cli::setup_eval},
+    {"modes", "per-mode activation and effective quadratic degrees of freedom F = 2 Cv/R versus temperature",
+     vibtherm::cli::setup_modes},
 };
 
 }  // namespace

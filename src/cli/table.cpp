@@ -11,14 +11,19 @@ namespace vibtherm::cli {
 namespace {
 
 std::string caption(const PreparedSpecies& p) {
-  const char* state = p.options.standard_state == StandardState::molar ? "1 mol/L" : nullptr;
-  const std::string standard = state ? state : fmt::format("{:g} Pa", p.options.pressure_Pa);
+  std::string standard = fmt::format("{:g} Pa", p.options.pressure_Pa);
+  if (p.options.standard_state == StandardState::molar)
+    standard = "1 mol/L";
+  else if (p.options.pressure_Pa == constants::bar_Pa)
+    standard = "1 bar";
+  else if (p.options.pressure_Pa == constants::atmosphere_Pa)
+    standard = "1 atm";
   if (!p.is_gas)
     return fmt::format("adsorbate, {} harmonic modes, ZPE {:.3f} kJ/mol", p.vibrations_cm1.size(),
                        p.zero_point_energy_J_per_mol / 1e3);
   return fmt::format("{} rotor, symmetry number {}, {} vibrations, standard state {}, ZPE {:.3f} kJ/mol",
-                     rotor_type_name(p.rotor.type), p.species.symmetry_number, p.vibrations_cm1.size(), standard,
-                     p.zero_point_energy_J_per_mol / 1e3);
+                     rotor_type_name(p.rotor.type), p.species.symmetry_number, p.vibrations_cm1.size(),
+                     standard, p.zero_point_energy_J_per_mol / 1e3);
 }
 
 }  // namespace
@@ -27,13 +32,15 @@ void setup_table(CLI::App& sub) {
   auto options = std::make_shared<CommonOptions>();
   auto breakdown = std::make_shared<bool>(false);
   add_common_options(sub, *options, true, {"text", "csv", "json"});
-  sub.add_flag("--breakdown", *breakdown, "add the per-motion contributions (translation, rotation, vibration, electronic)");
+  sub.add_flag("--breakdown", *breakdown,
+               "add the per-motion contributions (translation, rotation, vibration, electronic)");
   sub.callback([options, breakdown] {
     const auto temps = temperatures_or(*options, default_table_temperatures());
     const Batch batch = load_batch(*options);
     log_species_diagnostics(batch);
     std::vector<SpeciesTable> tables;
-    for (const auto& p : batch.species) tables.push_back({p.species.name, caption(p), tabulate(p, temps), true});
+    for (const auto& p : batch.species)
+      tables.push_back({p.species.name, caption(p), tabulate(p, temps), true});
     const TableWriteOptions write{*breakdown};
     const std::string& f = options->format;
     write_output(options->output, f == "json"  ? table_json(tables, write)

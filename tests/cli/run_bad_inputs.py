@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
-"""Runs `vibtherm table` on every malformed input in tests/bad/ and on a few bad option
-values, and checks the promise of design.md section 7: exit status 2, exactly one error
+"""Runs `vibtherm table` on every malformed species input in tests/bad/ (`vibtherm eval`
+on the malformed NASA polynomial files, *.dat) and on a few bad option values, and checks the promise of design.md section 7: exit status 2, exactly one error
 line on stderr (the one in NAME.expected), and no output file.
 
 Usage: run_bad_inputs.py VIBTHERM_EXECUTABLE [TESTS_BAD_DIR]
@@ -28,10 +28,10 @@ ARGUMENT_CASES = [
 ]
 
 
-def run_case(exe, bad_dir, args, expected, label, failures):
+def run_case(exe, bad_dir, args, expected, label, failures, subcommand="table"):
     with tempfile.TemporaryDirectory() as tmp:
         out = os.path.join(tmp, "out.txt")
-        result = subprocess.run([exe, "table", *args, "-o", out], cwd=bad_dir, capture_output=True,
+        result = subprocess.run([exe, subcommand, *args, "-o", out], cwd=bad_dir, capture_output=True,
                                 text=True, errors="replace", timeout=60)
         problems = []
         if result.returncode != 2:
@@ -62,7 +62,8 @@ def main():
             failures.append(f"{path.name}: no {expected_path.name}")
             continue
         expected = expected_path.read_text(encoding="utf-8").strip()
-        run_case(exe, bad_dir, [path.name], expected, path.name, failures)
+        subcommand = "eval" if path.suffix == ".dat" else "table"
+        run_case(exe, bad_dir, [path.name], expected, path.name, failures, subcommand)
     for args, expected in ARGUMENT_CASES:
         run_case(exe, bad_dir, args, expected, " ".join(args), failures)
     total = len(inputs) + len(ARGUMENT_CASES)

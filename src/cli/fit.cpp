@@ -1,0 +1,135 @@
+// vibtherm fit: NASA-7 / NASA-9 polynomials (or their JSON form) for one or many species.
+#include <fmt/format.h>
+#include <spdlog/spdlog.h>
+
+#include <algorithm>
+#include <fstream>
+#include <iostream>
+#include <memory>
+#include <sstream>
+
+#include "common.hpp"
+#include "vibtherm/checksum.hpp"
+#include "vibtherm/fit_nasa.hpp"
+#include "vibtherm/write_fit_json.hpp"
+#include "vibtherm/write_nasa7.hpp"
+#include "vibtherm/write_nasa9.hpp"
+
+namespace vibtherm::cli {
+
+namespace {
+
+struct FitCliOptions {
+  CommonOptions common;
+  std::string form = "nasa7";
+  std::string range;
+  bool allow_missing_hf = false;
+  bool cp_slope = false;
+  double grid_step_K = 5.0;
+  bool no_wrapper = false;
+};
+
+std::string file_sha256(const std::string& path) {
+  std::ifstream in(path, std::ios::binary);
+  std::ostringstream bytes;
+  bytes << in.rdbuf();
+  return sha256_hex(bytes.str());
+}
+
+std::vector<std::pair<std::string, std::string>> model_option_list(const FitCliOptions& o) {
+  return {{"standard_state", o.common.standard_state},
+          {"pressure", o.common.pressure_text.empty() ? "standard state" : o.common.pressure_text},
+          {"frequency_scale", fmt::format("{:g}", o.common.frequency_scale)},
+          {"transition_state", o.common.transition_state ? "true" : "false"},
+          {"imaginary_as_real_below_cm1", fmt::format("{:g}", o.common.imaginary_as_real_below_cm1)},
+          {"allow_missing_hf", o.allow_missing_hf ? "true" : "false"}};
+}
+
+void log_fit(const SpeciesFit& f) {
+  const FitResult& r = f.fit;
+  std::string ranges;
+  for (const auto& e : r.errors)
+    ranges += fmt::format(
+        "; {:g}-{:g} K: Cp max {:.3f} % rms {:.3f} %, H max {:.3f} kJ/mol, S max {:.4f} J/(mol K)", e.T_low_K,
+        e.T_high_K, 100 * e.max_Cp_relative, 100 * e.rms_Cp_relative, e.max_H_J_per_mol / 1e3,
+        e.max_S_J_per_mol_K);
+  spdlog::info("{}: fit{}", r.name, ranges);
+  if (r.searched_index >= 0)
+    spdlog::info("{}: breakpoint searched: {:g} K (largest Cp error {:.3f} %)", r.name,
+                 r.breakpoints_K[r.searched_index], 100 * r.searched_max_Cp_relative);
+  for (const auto& w : r.warnings) spdlog::warn("{}", w);
+  for (const auto& n : f.notes) spdlog::warn("{}: {}", r.name, n);
+}
+
+}  // namespace
+
+void setup_fit(CLI::App& sub) {
+  auto o = std::make_shared<FitCliOptions>();
+  add_common_options(sub, o->common, false, {});
+  sub.add_option("--form", o->form, "polynomial form written")
+      ->check(CLI::IsMember({"nasa7", "nasa9", "json"}))
+      ->capture_default_str();
+  sub.add_option("--range", o->range,
+                 "breakpoints in K: TLOW:TMID:THIGH (NASA-7, default 200:1000:3000) or T0:T1:...:Tn (NASA-9, "
+                 "default 200:1000:6000); one inner value may be 'auto'");
+  sub.add_flag("--allow-missing-hf", o->allow_missing_hf,
+               "write H(298.15 K) = 0 for species without enthalpy_of_formation (noted in the output)");
+  sub.add_flag("--cp-slope", o->cp_slope,
+               "make dCp/dT continuous at the joints too (default: Cp value only)");
+  sub.add_option("--grid-step", o->grid_step_K, "spacing of the fit grid in K")->capture_default_str();
+  sub.add_flag("--no-wrapper", o->no_wrapper, "omit the THERMO ... END (NASA-9: thermo ... END) wrapper");
+  sub.callback([o] {
+    FitOptions fit;
+    // JSON carries NASA-7 coefficients unless a NASA-9 range (more than 3 breakpoints) is asked for.
+    const bool nine = o->form == "nasa9";
+    fit.form = nine ? NasaForm::nasa9 : NasaForm::nasa7;
+    if (o->form == "json" && !o->range.empty() && std::count(o->range.begin(), o->range.end(), ':') != 2)
+      fit.form = NasaForm::nasa9;
+    fit.range = o->range.empty() ? default_fit_range(fit.form) : parse_fit_range(o->range, fit.form);
+    fit.allow_missing_hf = o->allow_missing_hf;
+    fit.Cp_slope_continuous = o->cp_slope;
+    if (!(o->grid_step_K > 0.0))
+      fail({}, fmt::format("--grid-step {}: expected a positive step in K", o->grid_step_K));
+    fit.grid_step_K = o->grid_step_K;
+
+    Batch batch = load_batch(o->common);
+    log_species_diagnostics(batch);
+    std::vector<FitRecord> records;
+    for (const auto& p : batch.species) {
+      try {
+        SpeciesFit f = fit_species(p, fit);
+        // Check that the record fits its format now, so one bad name fails one species.
+        if (o->form == "nasa7") write_nasa7_record(std::get<Nasa7>(f.polynomial));
+        if (o->form == "nasa9") write_nasa9_record(std::get<Nasa9>(f.polynomial));
+        log_fit(f);
+        const std::string& file = p.species.origin.file;
+        records.push_back(
+            {std::move(f), {file, file.empty() ? "" : file_sha256(file), model_option_list(*o)}});
+      } catch (const InputError& e) {
+        if (!o->common.keep_going) throw;
+        batch.failures.push_back(e.what());
+        std::cerr << e.what() << '\n';
+      }
+    }
+    const std::vector<std::string> header = {
+        fmt::format("vibtherm {}: rigid-rotor harmonic-oscillator model, constrained fit", VIBTHERM_VERSION),
+        fmt::format("standard state {}, frequency scale {:g}", o->common.standard_state,
+                    o->common.frequency_scale)};
+    std::string text;
+    if (o->form == "json") {
+      text = write_fit_json(records, fit);
+    } else if (o->form == "nasa9") {
+      std::vector<Nasa9> polys;
+      for (const auto& r : records) polys.push_back(std::get<Nasa9>(r.fit.polynomial));
+      text = write_nasa9(polys, Nasa9WriteOptions{!o->no_wrapper, header});
+    } else {
+      std::vector<Nasa7> polys;
+      for (const auto& r : records) polys.push_back(std::get<Nasa7>(r.fit.polynomial));
+      text = write_nasa7(polys, Nasa7WriteOptions{!o->no_wrapper, header});
+    }
+    write_output(o->common.output, text);
+    throw Exit{batch_status(batch)};
+  });
+}
+
+}  // namespace vibtherm::cli

@@ -1,0 +1,504 @@
+// Constrained least squares for NASA polynomials.
+//
+// Method: every range r has unknowns α_k (Cp coefficients in the scaled temperature
+// τ = T / 1000 K, exponents e_k = 0..4 for NASA-7 and −2..4 for NASA-9) and two
+// integration constants β_H, β_S. Cp/R, H/R and S/R are all linear in these unknowns,
+// so the fit is a linear least-squares problem with linear equality constraints, solved
+// by the nullspace method (Golub & Van Loan, Matrix Computations, 4th ed., §6.2): a QR
+// factorisation of the constraint matrix gives a particular solution and a basis of its
+// nullspace, and the remaining unconstrained problem is solved by column-pivoted QR.
+// The constraints therefore hold to rounding, unlike a penalty.
+//
+// Why these choices:
+// - τ = T/1000 K keeps the columns of the design matrix within a few orders of magnitude
+//   of each other (T⁴ at 6000 K is 1.3e15; τ⁴ is 1296); coefficients are converted back
+//   to kelvin afterwards.
+// - The objective is the relative Cp error, Σ [(Cp_fit − Cp)/Cp]², because the warning
+//   threshold and the users' tolerance are relative; Cp/R is floored at 0.5 in the weight
+//   so that a nearly frozen adsorbate at low T does not dominate the fit.
+// - H and S are not in the objective: they follow from Cp by integration, and their two
+//   constants per range are fixed exactly by the joint and 298.15 K constraints.
+#include "vibtherm/fit_nasa.hpp"
+
+#include <fmt/format.h>
+
+#include <Eigen/Dense>
+#include <algorithm>
+#include <charconv>
+#include <cmath>
+#include <limits>
+#include <map>
+
+#include "vibtherm/constants.hpp"
+#include "vibtherm/elements.hpp"
+#include "vibtherm/error.hpp"
+
+namespace vibtherm {
+
+namespace {
+
+constexpr double kScale_K = 1000.0;
+constexpr double kWeightFloor_Cp_over_R = 0.5;
+constexpr double kJointTolerance_K = 1e-9;
+constexpr double kBoundsTolerance_Cp_over_R = 1e-6;
+constexpr double R = constants::gas_constant_J_per_mol_K;
+
+std::vector<int> exponents_of(NasaForm form) {
+  if (form == NasaForm::nasa7) return {0, 1, 2, 3, 4};
+  return {-2, -1, 0, 1, 2, 3, 4};
+}
+
+// Cp/R, its τ derivative, ∫Cp/R dτ (the H/R basis in units of 1000 K) and ∫Cp/(Rτ) dτ
+// (the S/R basis) of one term τ^e.
+double cp_term(int e, double tau) { return std::pow(tau, e); }
+double dcp_term(int e, double tau) { return e == 0 ? 0.0 : e * std::pow(tau, e - 1); }
+double h_term(int e, double tau) { return e == -1 ? std::log(tau) : std::pow(tau, e + 1) / (e + 1); }
+double s_term(int e, double tau) { return e == 0 ? std::log(tau) : std::pow(tau, e) / e; }
+
+const char* form_name(NasaForm form) { return form == NasaForm::nasa7 ? "NASA-7" : "NASA-9"; }
+
+int range_index_of(const std::vector<double>& bp, double T_K) {
+  const int n = static_cast<int>(bp.size()) - 1;
+  for (int r = 0; r < n; ++r)
+    if (T_K <= bp[r + 1]) return r;
+  return n - 1;
+}
+
+bool in_range(const std::vector<double>& bp, int r, double T_K) {
+  return T_K >= bp[r] - kJointTolerance_K && T_K <= bp[r + 1] + kJointTolerance_K;
+}
+
+std::vector<Nasa9Range> solve(const FitInput& in, const std::vector<double>& bp, NasaForm form,
+                              bool slope_continuous) {
+  const std::vector<int> ex = exponents_of(form);
+  const int m = static_cast<int>(ex.size());
+  const int per = m + 2;  // α_0..α_{m-1}, β_H, β_S
+  const int nr = static_cast<int>(bp.size()) - 1;
+  const int n = nr * per;
+
+  // Design matrix: one row per (sample, range containing it).
+  std::vector<std::pair<int, int>> rows;  // (sample, range)
+  for (int i = 0; i < static_cast<int>(in.samples.size()); ++i)
+    for (int r = 0; r < nr; ++r)
+      if (in_range(bp, r, in.samples[i].T_K)) rows.emplace_back(i, r);
+  for (int r = 0; r < nr; ++r) {
+    const auto count = std::count_if(rows.begin(), rows.end(), [r](const auto& p) { return p.second == r; });
+    if (count < m)
+      fail({}, fmt::format("fit range {:g}-{:g} K holds {} grid points, fewer than its {} coefficients: "
+                           "widen the range or refine the grid",
+                           bp[r], bp[r + 1], count, m));
+  }
+  Eigen::MatrixXd A = Eigen::MatrixXd::Zero(static_cast<Eigen::Index>(rows.size()), n);
+  Eigen::VectorXd y(static_cast<Eigen::Index>(rows.size()));
+  for (std::size_t j = 0; j < rows.size(); ++j) {
+    const FitSample& s = in.samples[rows[j].first];
+    const int r = rows[j].second;
+    const double tau = s.T_K / kScale_K;
+    const double w = 1.0 / std::max(s.Cp_over_R, kWeightFloor_Cp_over_R);
+    for (int k = 0; k < m; ++k) A(j, r * per + k) = w * cp_term(ex[k], tau);
+    y(j) = w * s.Cp_over_R;
+  }
+
+  // Equality constraints.
+  std::vector<Eigen::VectorXd> crow;
+  std::vector<double> cval;
+  auto joint = [&](int r, double tau, auto basis, int beta) {
+    Eigen::VectorXd c = Eigen::VectorXd::Zero(n);
+    for (int k = 0; k < m; ++k) {
+      c(r * per + k) = basis(ex[k], tau);
+      c((r + 1) * per + k) = -basis(ex[k], tau);
+    }
+    if (beta >= 0) {
+      c(r * per + m + beta) = 1.0;
+      c((r + 1) * per + m + beta) = -1.0;
+    }
+    crow.push_back(c);
+    cval.push_back(0.0);
+  };
+  for (int r = 0; r + 1 < nr; ++r) {
+    const double tau = bp[r + 1] / kScale_K;
+    joint(r, tau, cp_term, -1);
+    if (slope_continuous) joint(r, tau, dcp_term, -1);
+    joint(r, tau, h_term, 0);
+    joint(r, tau, s_term, 1);
+  }
+  {
+    const double T0 = constants::reference_temperature_K;
+    const int r = range_index_of(bp, T0);
+    const double tau = T0 / kScale_K;
+    Eigen::VectorXd ch = Eigen::VectorXd::Zero(n), cs = Eigen::VectorXd::Zero(n);
+    for (int k = 0; k < m; ++k) {
+      ch(r * per + k) = h_term(ex[k], tau);
+      cs(r * per + k) = s_term(ex[k], tau);
+    }
+    ch(r * per + m) = 1.0;
+    cs(r * per + m + 1) = 1.0;
+    crow.push_back(ch);
+    cval.push_back(in.H298_over_R / kScale_K);
+    crow.push_back(cs);
+    cval.push_back(in.S298_over_R);
+  }
+  const int p = static_cast<int>(crow.size());
+  Eigen::MatrixXd Ct(n, p);
+  Eigen::VectorXd d(p);
+  for (int i = 0; i < p; ++i) {
+    Ct.col(i) = crow[i];
+    d(i) = cval[i];
+  }
+
+  // Nullspace method: Cᵀ P = Q [R1; 0]; x = Q1 R1⁻ᵀ Pᵀ d + Q2 z.
+  Eigen::ColPivHouseholderQR<Eigen::MatrixXd> cqr(Ct);
+  if (cqr.rank() < p) fail({}, "NASA fit: the continuity and 298.15 K constraints are linearly dependent");
+  const Eigen::MatrixXd Q = cqr.householderQ();
+  const Eigen::MatrixXd R1 = cqr.matrixR().topLeftCorner(p, p).triangularView<Eigen::Upper>();
+  const Eigen::VectorXd Ptd = cqr.colsPermutation().transpose() * d;
+  const Eigen::VectorXd u = R1.transpose().triangularView<Eigen::Lower>().solve(Ptd);
+  const Eigen::VectorXd x0 = Q.leftCols(p) * u;
+  const Eigen::MatrixXd N = Q.rightCols(n - p);
+  Eigen::ColPivHouseholderQR<Eigen::MatrixXd> lsq(A * N);
+  const Eigen::VectorXd z = lsq.solve(y - A * x0);
+  const Eigen::VectorXd x = x0 + N * z;
+
+  // Back to kelvin: a_k = α_k / 1000^e_k; the ln T terms shift the constants
+  // (H/R: e = −1 term α s ln τ = a ln T − a ln s; S/R: e = 0 term likewise).
+  std::vector<Nasa9Range> out(nr);
+  const double ln_s = std::log(kScale_K);
+  for (int r = 0; r < nr; ++r) {
+    Nasa9Range& range = out[r];
+    range.T_low_K = bp[r];
+    range.T_high_K = bp[r + 1];
+    double bH = kScale_K * x(r * per + m);
+    double bS = x(r * per + m + 1);
+    for (int k = 0; k < m; ++k) {
+      const double alpha = x(r * per + k);
+      range.a[ex[k] + 2] = alpha / std::pow(kScale_K, ex[k]);
+      if (ex[k] == -1) bH -= kScale_K * alpha * ln_s;
+      if (ex[k] == 0) bS -= alpha * ln_s;
+    }
+    range.b1 = bH;
+    range.b2 = bS;
+  }
+  return out;
+}
+
+std::vector<RangeErrors> errors_of(const FitInput& in, const std::vector<Nasa9Range>& ranges) {
+  std::vector<RangeErrors> out;
+  std::vector<double> bp;
+  for (const auto& r : ranges) bp.push_back(r.T_low_K);
+  bp.push_back(ranges.back().T_high_K);
+  for (int r = 0; r < static_cast<int>(ranges.size()); ++r) {
+    RangeErrors e;
+    e.T_low_K = bp[r];
+    e.T_high_K = bp[r + 1];
+    double s_cp_rel = 0, s_cp = 0, s_h = 0, s_s = 0;
+    for (const FitSample& s : in.samples) {
+      if (!in_range(bp, r, s.T_K)) continue;
+      const NasaProperties p = nasa9_properties(ranges[r], s.T_K);
+      const double dcp = p.Cp_over_R - s.Cp_over_R;
+      const double rel = std::abs(dcp) / std::max(std::abs(s.Cp_over_R), 1e-300);
+      const double dh = p.H_over_RT - s.H_over_R / s.T_K;
+      const double ds = p.S_over_R - s.S_over_R;
+      ++e.samples;
+      if (rel > e.max_Cp_relative) {
+        e.max_Cp_relative = rel;
+        e.T_at_max_Cp_K = s.T_K;
+      }
+      e.max_Cp_over_R = std::max(e.max_Cp_over_R, std::abs(dcp));
+      e.max_H_over_RT = std::max(e.max_H_over_RT, std::abs(dh));
+      e.max_S_over_R = std::max(e.max_S_over_R, std::abs(ds));
+      e.max_H_J_per_mol = std::max(e.max_H_J_per_mol, std::abs(dh) * R * s.T_K);
+      s_cp_rel += rel * rel;
+      s_cp += dcp * dcp;
+      s_h += dh * dh;
+      s_s += ds * ds;
+    }
+    e.max_S_J_per_mol_K = e.max_S_over_R * R;
+    if (e.samples > 0) {
+      e.rms_Cp_relative = std::sqrt(s_cp_rel / e.samples);
+      e.rms_Cp_over_R = std::sqrt(s_cp / e.samples);
+      e.rms_H_over_RT = std::sqrt(s_h / e.samples);
+      e.rms_S_over_R = std::sqrt(s_s / e.samples);
+    }
+    out.push_back(e);
+  }
+  return out;
+}
+
+double worst_Cp_relative(const std::vector<RangeErrors>& errors) {
+  double worst = 0.0;
+  for (const auto& e : errors) worst = std::max(worst, e.max_Cp_relative);
+  return worst;
+}
+
+std::vector<BoundsExcursion> excursions_of(const FitInput& in, const std::vector<Nasa9Range>& ranges) {
+  std::vector<BoundsExcursion> out;
+  std::vector<double> bp;
+  for (const auto& r : ranges) bp.push_back(r.T_low_K);
+  bp.push_back(ranges.back().T_high_K);
+  BoundsExcursion* open = nullptr;
+  for (const FitSample& s : in.samples) {
+    if (s.T_K < bp.front() - kJointTolerance_K || s.T_K > bp.back() + kJointTolerance_K) continue;
+    const double cp = nasa9_properties(ranges[range_index_of(bp, s.T_K)], s.T_K).Cp_over_R;
+    const double upper = in.bounds.upper_over_R + s.electronic_Cp_over_R;
+    const double lower = in.bounds.lower_over_R;
+    int side = 0;
+    if (cp > upper + kBoundsTolerance_Cp_over_R) side = 1;
+    if (cp < lower - kBoundsTolerance_Cp_over_R) side = -1;
+    if (side == 0) {
+      open = nullptr;
+      continue;
+    }
+    if (open == nullptr || open->above != (side > 0)) {
+      out.push_back(BoundsExcursion{s.T_K, s.T_K, side > 0, cp, side > 0 ? upper : lower});
+      open = &out.back();
+    }
+    open->T_to_K = s.T_K;
+    if ((side > 0 && cp > open->worst_Cp_over_R) || (side < 0 && cp < open->worst_Cp_over_R)) {
+      open->worst_Cp_over_R = cp;
+      open->bound_over_R = side > 0 ? upper : lower;
+    }
+  }
+  return out;
+}
+
+double parse_number(std::string_view text, std::string_view whole) {
+  double value = 0.0;
+  const char* end = text.data() + text.size();
+  auto [ptr, ec] = std::from_chars(text.data(), end, value);
+  if (ec != std::errc() || ptr != end || !std::isfinite(value))
+    fail({}, fmt::format("--range '{}': '{}' is not a temperature in K (expected e.g. 200:1000:3000)", whole,
+                         text));
+  return value;
+}
+
+}  // namespace
+
+FitRange default_fit_range(NasaForm form) {
+  if (form == NasaForm::nasa7) return FitRange{{200.0, 1000.0, 3000.0}, -1};
+  return FitRange{{200.0, 1000.0, 6000.0}, -1};
+}
+
+FitRange parse_fit_range(std::string_view text, NasaForm form) {
+  FitRange out;
+  std::size_t start = 0;
+  while (true) {
+    const std::size_t colon = text.find(':', start);
+    std::string_view part = text.substr(start, colon == std::string_view::npos ? text.npos : colon - start);
+    while (!part.empty() && part.front() == ' ') part.remove_prefix(1);
+    while (!part.empty() && part.back() == ' ') part.remove_suffix(1);
+    if (part == "auto") {
+      if (out.auto_index >= 0) fail({}, fmt::format("--range '{}': only one breakpoint may be 'auto'", text));
+      out.auto_index = static_cast<int>(out.breakpoints_K.size());
+      out.breakpoints_K.push_back(std::numeric_limits<double>::quiet_NaN());
+    } else {
+      out.breakpoints_K.push_back(parse_number(part, text));
+    }
+    if (colon == std::string_view::npos) break;
+    start = colon + 1;
+  }
+  const auto n = out.breakpoints_K.size();
+  if (form == NasaForm::nasa7 && n != 3)
+    fail({}, fmt::format("--range '{}': NASA-7 needs TLOW:TMID:THIGH (3 values), got {}", text, n));
+  if (n < 2) fail({}, fmt::format("--range '{}': need at least TLOW:THIGH", text));
+  if (out.auto_index == 0 || out.auto_index == static_cast<int>(n) - 1)
+    fail({}, fmt::format("--range '{}': only an inner breakpoint may be 'auto'", text));
+  double last = 0.0;
+  for (std::size_t i = 0; i < n; ++i) {
+    const double t = out.breakpoints_K[i];
+    if (std::isnan(t)) continue;
+    if (t <= 0.0 || t <= last)
+      fail({}, fmt::format("--range '{}': temperatures must be positive and ascending", text));
+    last = t;
+  }
+  return out;
+}
+
+FitResult fit_samples(const FitInput& input, const FitOptions& options) {
+  FitResult result;
+  result.name = input.name;
+  result.form = options.form;
+  result.bounds = input.bounds;
+  std::vector<double> bp = options.range.breakpoints_K;
+  const int ai = options.range.auto_index;
+  if (ai >= 0) {
+    // Search the `auto` breakpoint on a grid for the smallest maximum relative Cp error.
+    const double lo = bp[ai - 1] + options.auto_margin_K;
+    const double hi = bp[ai + 1] - options.auto_margin_K;
+    double best = std::numeric_limits<double>::infinity();
+    double best_T = std::numeric_limits<double>::quiet_NaN();
+    for (double t = std::ceil(lo / options.auto_step_K) * options.auto_step_K; t <= hi + 1e-9;
+         t += options.auto_step_K) {
+      bp[ai] = t;
+      const auto ranges = solve(input, bp, options.form, options.Cp_slope_continuous);
+      const double worst = worst_Cp_relative(errors_of(input, ranges));
+      if (worst < best) {
+        best = worst;
+        best_T = t;
+      }
+    }
+    if (std::isnan(best_T))
+      fail({}, fmt::format("--range: no 'auto' candidate between {} and {} K (need {} K margins)", bp[ai - 1],
+                           bp[ai + 1], options.auto_margin_K));
+    bp[ai] = best_T;
+    result.searched_index = ai;
+    result.searched_max_Cp_relative = best;
+  }
+  result.breakpoints_K = bp;
+  result.ranges = solve(input, bp, options.form, options.Cp_slope_continuous);
+  result.errors = errors_of(input, result.ranges);
+  result.excursions = excursions_of(input, result.ranges);
+
+  const FitThresholds& th = options.thresholds;
+  for (const auto& e : result.errors) {
+    if (e.max_Cp_relative > th.Cp_relative)
+      result.warnings.push_back(
+          fmt::format("{}: {} fit {:g}-{:g} K: max Cp error {:.3f} % at {:g} K exceeds {:g} %", input.name,
+                      form_name(options.form), e.T_low_K, e.T_high_K, 100 * e.max_Cp_relative,
+                      e.T_at_max_Cp_K, 100 * th.Cp_relative));
+    if (e.max_H_J_per_mol > th.H_J_per_mol)
+      result.warnings.push_back(fmt::format(
+          "{}: {} fit {:g}-{:g} K: max H error {:.3f} kJ/mol exceeds {:g} kJ/mol", input.name,
+          form_name(options.form), e.T_low_K, e.T_high_K, e.max_H_J_per_mol / 1000, th.H_J_per_mol / 1000));
+    if (e.max_S_J_per_mol_K > th.S_J_per_mol_K)
+      result.warnings.push_back(
+          fmt::format("{}: {} fit {:g}-{:g} K: max S error {:.3f} J/(mol K) exceeds {:g}", input.name,
+                      form_name(options.form), e.T_low_K, e.T_high_K, e.max_S_J_per_mol_K, th.S_J_per_mol_K));
+  }
+  // Every excursion is listed; one within the Cp threshold of its bound is the fit's own
+  // error near an asymptote (Cp → 4R at low T) rather than ringing, so only larger ones warn.
+  for (const auto& x : result.excursions) {
+    if (std::abs(x.worst_Cp_over_R - x.bound_over_R) <= th.Cp_relative * x.bound_over_R) continue;
+    result.warnings.push_back(fmt::format(
+        "{}: fitted Cp/R {} its {} bound between {:g} and {:g} K (worst {:.4f}, bound {:.4f})", input.name,
+        x.above ? "exceeds" : "falls below", x.above ? "classical (upper)" : "translation+rotation (lower)",
+        x.T_from_K, x.T_to_K, x.worst_Cp_over_R, x.bound_over_R));
+  }
+  return result;
+}
+
+std::vector<ElementAmount> species_composition(const Species& species) {
+  std::map<std::string, double> counts;
+  if (!species.atoms.empty()) {
+    for (const Atom& a : species.atoms) {
+      const bool hydrogen_label = a.isotope == "D" || a.isotope == "T";
+      counts[hydrogen_label ? a.isotope : a.symbol] += 1.0;
+    }
+  } else {
+    for (const auto& [symbol, n] : species.formula) counts[symbol] += n;
+  }
+  std::vector<ElementAmount> out;
+  for (const char* first : {"C", "H"}) {
+    auto it = counts.find(first);
+    if (it != counts.end()) {
+      out.push_back({it->first, it->second});
+      counts.erase(it);
+    }
+  }
+  for (const auto& [symbol, n] : counts) out.push_back({symbol, n});
+  return out;
+}
+
+double species_molar_mass_g_per_mol(const Species& species) {
+  double total = 0.0;
+  auto weight = [&](const std::string& symbol) {
+    const auto info = find_element(symbol);
+    if (!info)
+      fail(species.origin, fmt::format("unknown element '{}' in species '{}'", symbol, species.name));
+    return info->standard_atomic_weight;
+  };
+  if (!species.atoms.empty()) {
+    for (const Atom& a : species.atoms) total += a.isotope.empty() ? weight(a.symbol) : a.mass_amu;
+  } else {
+    for (const auto& [symbol, n] : species.formula) total += n * weight(symbol);
+  }
+  return total;  // amu per molecule = g/mol
+}
+
+SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& options) {
+  const Species& sp = prepared.species;
+  SpeciesFit out;
+  if (!sp.enthalpy_of_formation_J_per_mol && !options.allow_missing_hf)
+    fail(sp.origin,
+         fmt::format("species '{}' has no enthalpy of formation, which a NASA polynomial needs "
+                     "(H(298.15 K) = ΔfH°): add `enthalpy_of_formation: VALUE` (kJ/mol, or {{value, unit}}) "
+                     "to the species file, or pass --allow-missing-hf to write H(298.15 K) = 0",
+                     sp.name));
+  out.enthalpy_of_formation_missing = !sp.enthalpy_of_formation_J_per_mol.has_value();
+  out.enthalpy_of_formation_J_per_mol = sp.enthalpy_of_formation_J_per_mol.value_or(0.0);
+  if (out.enthalpy_of_formation_missing)
+    out.notes.push_back("enthalpy of formation missing: H(298.15 K) set to 0 (--allow-missing-hf)");
+
+  const auto& bp = options.range.breakpoints_K;
+  const double T_lo = bp.front(), T_hi = bp.back();
+  std::vector<double> grid;
+  for (double t = T_lo; t < T_hi; t += options.grid_step_K) grid.push_back(t);
+  for (double t : bp)
+    if (!std::isnan(t)) grid.push_back(t);
+  std::sort(grid.begin(), grid.end());
+  grid.erase(std::unique(grid.begin(), grid.end(), [](double a, double b) { return std::abs(a - b) < 1e-9; }),
+             grid.end());
+
+  const ThermoPoint ref = evaluate(prepared, constants::reference_temperature_K);
+  out.S298_J_per_mol_K = ref.S_J_per_mol_K;
+  out.H298_minus_H0_J_per_mol = ref.H_minus_H0_J_per_mol;
+
+  FitInput in;
+  in.name = sp.name;
+  in.H298_over_R = out.enthalpy_of_formation_J_per_mol / R;
+  in.S298_over_R = ref.S_J_per_mol_K / R;
+  for (const ThermoPoint& p : tabulate(prepared, grid)) {
+    in.samples.push_back(FitSample{p.T_K, p.Cp_J_per_mol_K / R,
+                                   (out.enthalpy_of_formation_J_per_mol + p.H_minus_H298_J_per_mol) / R,
+                                   p.S_J_per_mol_K / R, p.electronic.Cp_over_R});
+  }
+  // Equipartition bounds (common practice): Cp = Cv + R for an ideal gas; the lower
+  // bound is translation (3/2) + rotation (0, 1, 3/2) + 1.
+  const double rotation = prepared.rotor.type == RotorType::atom     ? 0.0
+                          : prepared.rotor.type == RotorType::linear ? 1.0
+                                                                     : 1.5;
+  in.bounds.lower_over_R = prepared.is_gas ? 2.5 + rotation : 0.0;
+  in.bounds.upper_over_R = classical_Cv_over_R(prepared) + (prepared.is_gas ? 1.0 : 0.0);
+
+  out.fit = fit_samples(in, options);
+  out.molar_mass_g_per_mol = species_molar_mass_g_per_mol(sp);
+  const auto composition = species_composition(sp);
+
+  if (options.form == NasaForm::nasa7) {
+    Nasa7 n;
+    n.name = sp.name;
+    n.note = out.enthalpy_of_formation_missing ? "noHf" : "RRHO";
+    n.composition = composition;
+    n.phase = prepared.is_gas ? 'G' : 'S';
+    n.T_low_K = out.fit.breakpoints_K[0];
+    n.T_mid_K = out.fit.breakpoints_K[1];
+    n.T_high_K = out.fit.breakpoints_K[2];
+    for (int k = 0; k < 5; ++k) {
+      n.low[k] = out.fit.ranges[0].a[k + 2];
+      n.high[k] = out.fit.ranges[1].a[k + 2];
+    }
+    n.low[5] = out.fit.ranges[0].b1;
+    n.low[6] = out.fit.ranges[0].b2;
+    n.high[5] = out.fit.ranges[1].b1;
+    n.high[6] = out.fit.ranges[1].b2;
+    n.comments = out.notes;
+    out.polynomial = n;
+  } else {
+    Nasa9 n;
+    n.name = sp.name;
+    // Record 1 leaves 62 columns for the comment, so the note is stated briefly here and
+    // in full in the JSON form.
+    n.comment = "vibtherm " VIBTHERM_VERSION " RRHO fit";
+    if (out.enthalpy_of_formation_missing) n.comment += "; H298=0: enthalpy of formation missing";
+    n.date_code = out.enthalpy_of_formation_missing ? "noHf" : "RRHO";
+    n.composition = composition;
+    n.phase = prepared.is_gas ? 0 : 1;
+    n.molar_mass_g_per_mol = out.molar_mass_g_per_mol;
+    n.enthalpy_of_formation_J_per_mol = out.enthalpy_of_formation_J_per_mol;
+    n.H298_minus_H0_J_per_mol = out.H298_minus_H0_J_per_mol;
+    n.ranges = out.fit.ranges;
+    out.polynomial = n;
+  }
+  return out;
+}
+
+}  // namespace vibtherm
