@@ -19,6 +19,8 @@
 #include <charconv>
 #include <vector>
 
+#include "vibtherm/spelling.hpp"
+
 namespace vibtherm {
 namespace {
 
@@ -123,23 +125,6 @@ bool equal_ignoring_case(std::string_view a, std::string_view b) {
          std::equal(a.begin(), a.end(), b.begin(), [](char x, char y) { return lower(x) == lower(y); });
 }
 
-// Levenshtein distance, case-insensitive; symbols are at most a few characters long.
-std::size_t edit_distance(std::string_view a, std::string_view b) {
-  std::vector<std::size_t> row(b.size() + 1);
-  for (std::size_t j = 0; j <= b.size(); ++j) row[j] = j;
-  for (std::size_t i = 1; i <= a.size(); ++i) {
-    std::size_t diagonal = row[0];
-    row[0] = i;
-    for (std::size_t j = 1; j <= b.size(); ++j) {
-      std::size_t above = row[j];
-      std::size_t substitution = diagonal + (lower(a[i - 1]) == lower(b[j - 1]) ? 0 : 1);
-      row[j] = std::min({above + 1, row[j - 1] + 1, substitution});
-      diagonal = above;
-    }
-  }
-  return row[b.size()];
-}
-
 }  // namespace
 
 std::span<const ElementInfo> all_elements() { return element_table; }
@@ -205,7 +190,7 @@ std::string closest_element_symbol(std::string_view symbol) {
   std::string best;
   for (const ElementInfo& e : element_table) {
     if (lower(e.symbol.front()) != lower(symbol.front())) continue;
-    if (edit_distance(e.symbol, symbol) == 1) {
+    if (edit_distance(e.symbol, symbol, LetterCase::ignored) == 1) {
       best = std::string(e.symbol);
       break;
     }

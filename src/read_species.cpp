@@ -15,6 +15,7 @@
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/elements.hpp"
+#include "vibtherm/spelling.hpp"
 #include "vibtherm/units.hpp"
 
 namespace vibtherm {
@@ -37,35 +38,6 @@ std::string quote(std::string_view text) {
   }
   if (text.size() > max_shown) shown += "...";
   return "'" + shown + "'";
-}
-
-std::size_t edit_distance(std::string_view a, std::string_view b) {
-  std::vector<std::size_t> row(b.size() + 1);
-  for (std::size_t j = 0; j <= b.size(); ++j) row[j] = j;
-  for (std::size_t i = 1; i <= a.size(); ++i) {
-    std::size_t diagonal = row[0];
-    row[0] = i;
-    for (std::size_t j = 1; j <= b.size(); ++j) {
-      std::size_t above = row[j];
-      row[j] = std::min({above + 1, row[j - 1] + 1, diagonal + (a[i - 1] == b[j - 1] ? 0 : 1)});
-      diagonal = above;
-    }
-  }
-  return row[b.size()];
-}
-
-// The closest candidate within a third of the word's length (at least 2 edits), or "".
-std::string closest_word(std::string_view word, const std::vector<std::string>& candidates) {
-  std::string best;
-  std::size_t best_distance = std::max<std::size_t>(2, word.size() / 3) + 1;
-  for (const std::string& c : candidates) {
-    std::size_t d = edit_distance(word, c);
-    if (d < best_distance) {
-      best = c;
-      best_distance = d;
-    }
-  }
-  return best;
 }
 
 std::string join(const std::vector<std::string>& words) {
