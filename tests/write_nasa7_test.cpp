@@ -5,20 +5,15 @@
 #include <fstream>
 #include <sstream>
 
+#include "test_text.hpp"
 #include "vibtherm/error.hpp"
 
 using namespace vibtherm;
 
 namespace {
 
-std::vector<std::string> lines_of(const std::string& text) {
-  std::vector<std::string> out;
-  std::istringstream in(text);
-  for (std::string s; std::getline(in, s);) out.push_back(s);
-  return out;
-}
-
-std::string cols(const std::string& s, int first, int last) { return s.substr(first - 1, last - first + 1); }
+using test::cols;
+using test::lines_of;
 
 Nasa7 o2_record() {
   Nasa7 n;

@@ -11,6 +11,7 @@
 #include <string>
 #include <vector>
 
+#include "csv_lines.hpp"
 #include "vibtherm/error.hpp"
 #include "vibtherm/fit_nasa.hpp"
 #include "vibtherm/read_nasa.hpp"
@@ -18,13 +19,7 @@
 
 namespace {
 
-std::vector<std::string> split_csv(const std::string& line) {
-  std::vector<std::string> fields;
-  std::stringstream stream(line);
-  std::string field;
-  while (std::getline(stream, field, ',')) fields.push_back(field);
-  return fields;
-}
+using vibtherm::validation::split_csv;
 
 }  // namespace
 

@@ -10,19 +10,14 @@
 #include <string>
 #include <vector>
 
+#include "csv_lines.hpp"
 #include "vibtherm/error.hpp"
 #include "vibtherm/read_species.hpp"
 #include "vibtherm/thermo.hpp"
 
 namespace {
 
-std::vector<std::string> split_csv(const std::string& line) {
-  std::vector<std::string> fields;
-  std::stringstream stream(line);
-  std::string field;
-  while (std::getline(stream, field, ',')) fields.push_back(field);
-  return fields;
-}
+using vibtherm::validation::split_csv;
 
 double quantity(const vibtherm::ThermoPoint& row, const std::string& name) {
   if (name == "S") return row.S_J_per_mol_K;
