@@ -41,6 +41,7 @@ int main(int argc, char** argv) {
   app.add_flag("-q,--quiet", quiet, "show errors only");
   for (const auto& entry : subcommands) {
     CLI::App* sub = app.add_subcommand(entry.name, entry.description);
+    sub->fallthrough();  // global options such as -q work after the subcommand too
     entry.setup(*sub);
   }
   app.parse_complete_callback([&] {
