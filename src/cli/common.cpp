@@ -83,7 +83,15 @@ std::vector<double> temperatures_or(const CommonOptions& o, const std::vector<do
 Batch load_batch(const CommonOptions& o) {
   const ModelOptions model = model_options(o);
   Batch batch;
-  for (const auto& path : expand_species_paths(o.inputs)) {
+  const auto paths = expand_species_paths(o.inputs);
+  // Progress only for people: a terminal, a large batch, and not --quiet.
+  const bool progress =
+      ::isatty(STDERR_FILENO) && paths.size() >= 200 && spdlog::get_level() <= spdlog::level::info;
+  for (const auto& path : paths) {
+    if (progress && batch.species.size() % 100 == 0)
+      std::cerr << fmt::format("\rreading species {}/{}", batch.species.size() + batch.failures.size(),
+                               paths.size())
+                << std::flush;
     try {
       batch.species.push_back(prepare_species(read_species_file(path), model));
     } catch (const InputError& e) {
@@ -92,6 +100,7 @@ Batch load_batch(const CommonOptions& o) {
       std::cerr << e.what() << '\n';
     }
   }
+  if (progress) std::cerr << "\r\033[K" << std::flush;  // clear the progress line
   return batch;
 }
 
