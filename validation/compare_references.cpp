@@ -41,8 +41,8 @@ int main(int argc, char** argv) {
     return 2;
   }
   int failures = 0, cases = 0;
-  fmt::print("{:<8} {:<10} {:>8} {:>11} {:>11} {:>9} {:>7}  {:<4} {}\n", "species", "quantity", "T/K", "ours",
-             "published", "diff", "tol", "ok", "source");
+  fmt::print("{:<8} {:<10} {:<9} {:>8} {:>11} {:>11} {:>9} {:>7}  {:<4} {}\n", "species", "quantity", "unit",
+             "T/K", "ours", "published", "diff", "tol", "ok", "source");
   std::string line;
   while (std::getline(in, line)) {
     if (line.empty() || line[0] == '#') continue;
@@ -59,9 +59,9 @@ int main(int argc, char** argv) {
       const bool ok = std::abs(diff) <= tolerance;
       ++cases;
       if (!ok) ++failures;
-      fmt::print("{:<8} {:<10} {:>8.2f} {:>11.4f} {:>11.4f} {:>+9.4f} {:>7.3f}  {:<4} {}\n",
-                 prepared.species.name, f[1] + " " + (f[5] == "kJ/mol" ? "kJ" : "J/K"), T, ours, published,
-                 diff, tolerance, ok ? "ok" : "FAIL", f[6]);
+      fmt::print("{:<8} {:<10} {:<9} {:>8.2f} {:>11.4f} {:>11.4f} {:>+9.4f} {:>7.3f}  {:<4} {}\n",
+                 prepared.species.name, f[1], f[5], T, ours, published, diff, tolerance, ok ? "ok" : "FAIL",
+                 f[6]);
     } catch (const std::exception& e) {
       std::fprintf(stderr, "%s\n", e.what());
       return 2;
