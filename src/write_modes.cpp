@@ -387,10 +387,10 @@ double svg_heat_map(std::string& out, const ModesReport& r, const std::vector<si
   const double bar_top = top, bar_height = std::max(height, 150.0);
   out += fmt::format(R"(<g class="legend"><text x="{:.1f}" y="{:.1f}" font-size="11">Cv/R of a mode</text>)",
                      legend_left, bar_top - 8);
-  out +=
-      fmt::format(R"~(<rect x="{:.1f}" y="{:.1f}" width="14" height="{:.1f}" fill="url(#{}activation-ramp)" )~"
-                  R"(stroke="black"/>)",
-                  legend_left, bar_top, bar_height, xml_escape(id_prefix));
+  out += fmt::format(
+      R"~(<rect x="{:.1f}" y="{:.1f}" width="14" height="{:.1f}" fill="url(#{}activation-ramp)" )~"
+      R"(stroke="black"/>)",
+      legend_left, bar_top, bar_height, xml_escape(id_prefix));
   const std::array<std::pair<double, std::string>, 5> marks{{
       {0.0, "0"},
       {r.thresholds.frozen_below_Cv_over_R,

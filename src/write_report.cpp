@@ -18,12 +18,23 @@ std::string html_escape(std::string_view text) {
   out.reserve(text.size());
   for (char c : text) {
     switch (c) {
-      case '&': out += "&amp;"; break;
-      case '<': out += "&lt;"; break;
-      case '>': out += "&gt;"; break;
-      case '"': out += "&quot;"; break;
-      case '\'': out += "&#39;"; break;
-      default: out += c;
+      case '&':
+        out += "&amp;";
+        break;
+      case '<':
+        out += "&lt;";
+        break;
+      case '>':
+        out += "&gt;";
+        break;
+      case '"':
+        out += "&quot;";
+        break;
+      case '\'':
+        out += "&#39;";
+        break;
+      default:
+        out += c;
     }
   }
   return out;
@@ -57,8 +68,8 @@ double nice_step(double span, int max_ticks) {
 std::vector<double> temperature_ticks(double low, double high, bool log) {
   std::vector<double> ticks;
   if (log) {
-    for (int k = static_cast<int>(std::floor(std::log10(low))); k <= static_cast<int>(std::ceil(std::log10(high)));
-         ++k)
+    for (int k = static_cast<int>(std::floor(std::log10(low)));
+         k <= static_cast<int>(std::ceil(std::log10(high))); ++k)
       for (double m : {1.0, 2.0, 5.0}) {
         const double t = m * std::pow(10.0, k);
         if (t >= low * (1 - 1e-9) && t <= high * (1 + 1e-9)) ticks.push_back(t);
@@ -71,9 +82,10 @@ std::vector<double> temperature_ticks(double low, double high, bool log) {
 }
 
 std::string polyline(const std::vector<std::pair<double, double>>& points, const char* css_class,
-                     const char* colour, const char* dash) {
-  std::string out = fmt::format(R"(<polyline class="{}" fill="none" stroke="{}" stroke-width="2"{} points=")",
-                                css_class, colour, dash);
+                     const char* colour, const char* dash, double stroke_width = 2.0) {
+  std::string out =
+      fmt::format(R"(<polyline class="{}" fill="none" stroke="{}" stroke-width="{:g}"{} points=")", css_class,
+                  colour, stroke_width, dash);
   for (size_t i = 0; i < points.size(); ++i)
     out += fmt::format("{}{:.1f},{:.1f}", i ? " " : "", points[i].first, points[i].second);
   return out + "\"/>\n";
@@ -83,13 +95,13 @@ std::string polyline(const std::vector<std::pair<double, double>>& points, const
 
 std::string Cp_curve_svg(const ReportSpecies& s, TemperatureAxis axis) {
   const auto& curve = s.Cp_curve;
-  std::string out = fmt::format(
-      R"(<svg class="cp-plot" width="{0:.0f}" height="{1:.0f}" viewBox="0 0 {0:.0f} {1:.0f}" )"
-      R"(font-family="sans-serif" role="img">)"
-      "\n<title>Cp(T) of {2}: engine, fitted NASA-7 polynomial and classical limit</title>\n"
-      R"(<rect width="100%" height="100%" fill="white"/>)"
-      "\n",
-      width, height, html_escape(s.facts.name));
+  std::string out =
+      fmt::format(R"(<svg class="cp-plot" width="{0:.0f}" height="{1:.0f}" viewBox="0 0 {0:.0f} {1:.0f}" )"
+                  R"(font-family="sans-serif" role="img">)"
+                  "\n<title>Cp(T) of {2}: engine, fitted NASA-7 polynomial and classical limit</title>\n"
+                  R"(<rect width="100%" height="100%" fill="white"/>)"
+                  "\n",
+                  width, height, html_escape(s.facts.name));
   if (curve.size() < 2) return out + "</svg>";
   const bool log = axis == TemperatureAxis::log;
   const double T_low = curve.front().T_K, T_high = curve.back().T_K;
@@ -104,7 +116,8 @@ std::string Cp_curve_svg(const ReportSpecies& s, TemperatureAxis axis) {
 
   out += R"(<g class="grid" stroke="#dddddd">)";
   for (double t : temperature_ticks(T_low, T_high, log))
-    out += fmt::format(R"(<line x1="{0:.1f}" y1="{1:.1f}" x2="{0:.1f}" y2="{2:.1f}"/>)", ax.x(t), top, bottom);
+    out +=
+        fmt::format(R"(<line x1="{0:.1f}" y1="{1:.1f}" x2="{0:.1f}" y2="{2:.1f}"/>)", ax.x(t), top, bottom);
   for (double v = y_step; v < y_max * (1 + 1e-9); v += y_step)
     out += fmt::format(R"(<line x1="{0:.1f}" y1="{1:.1f}" x2="{2:.1f}" y2="{1:.1f}"/>)", left, y(v), right);
   out += "</g>\n";
@@ -133,17 +146,20 @@ std::string Cp_curve_svg(const ReportSpecies& s, TemperatureAxis axis) {
             "\n",
             ax.x(b), top, bottom, top - 6, b);
 
-  out += polyline({{left, y(s.classical_Cp_J_per_mol_K)}, {right, y(s.classical_Cp_J_per_mol_K)}}, "classical",
-                  "#555555", R"( stroke-dasharray="8 5")");
+  out += polyline({{left, y(s.classical_Cp_J_per_mol_K)}, {right, y(s.classical_Cp_J_per_mol_K)}},
+                  "classical", "#555555", R"( stroke-dasharray="8 5")");
   std::vector<std::pair<double, double>> engine, fitted;
   for (const auto& p : curve) {
     engine.emplace_back(ax.x(p.T_K), y(p.engine_Cp_J_per_mol_K));
     if (p.fitted_Cp_J_per_mol_K) fitted.emplace_back(ax.x(p.T_K), y(*p.fitted_Cp_J_per_mol_K));
   }
-  out += polyline(engine, "engine", "#2166ac", "");
-  if (!fitted.empty()) out += polyline(fitted, "fitted", "#e08214", R"( stroke-dasharray="5 4")");
-  out += fmt::format(R"(<rect x="{:.1f}" y="{:.1f}" width="{:.1f}" height="{:.1f}" fill="none" stroke="black"/>)",
-                     left, top, right - left, bottom - top);
+  // The fit usually lies on the engine curve: a wide engine line under a narrow dashed
+  // fitted one keeps both visible.
+  out += polyline(engine, "engine", "#6fa8dc", "", 4.0);
+  if (!fitted.empty()) out += polyline(fitted, "fitted", "#d35400", R"( stroke-dasharray="6 4")", 1.5);
+  out += fmt::format(
+      R"(<rect x="{:.1f}" y="{:.1f}" width="{:.1f}" height="{:.1f}" fill="none" stroke="black"/>)", left, top,
+      right - left, bottom - top);
   out += '\n';
 
   // Legend to the right of the plot.
@@ -153,8 +169,8 @@ std::string Cp_curve_svg(const ReportSpecies& s, TemperatureAxis axis) {
     const char* dash;
     std::string label;
   };
-  std::vector<Entry> entries{{"#2166ac", "", "engine (RRHO model)"}};
-  if (!fitted.empty()) entries.push_back({"#e08214", R"( stroke-dasharray="5 4")", "fitted NASA-7"});
+  std::vector<Entry> entries{{"#6fa8dc", "", "engine (RRHO model)"}};
+  if (!fitted.empty()) entries.push_back({"#d35400", R"( stroke-dasharray="6 4")", "fitted NASA-7"});
   entries.push_back({"#555555", R"( stroke-dasharray="8 5")",
                      fmt::format("classical limit {:.1f}", s.classical_Cp_J_per_mol_K)});
   out += R"(<g class="legend" font-size="11">)";
@@ -163,7 +179,8 @@ std::string Cp_curve_svg(const ReportSpecies& s, TemperatureAxis axis) {
     out += fmt::format(
         R"(<line x1="{:.1f}" y1="{:.1f}" x2="{:.1f}" y2="{:.1f}" stroke="{}" stroke-width="2"{}/>)"
         R"(<text x="{:.1f}" y="{:.1f}">{}</text>)",
-        lx, ly, lx + 28, ly, entries[i].colour, entries[i].dash, lx + 34, ly + 4, html_escape(entries[i].label));
+        lx, ly, lx + 28, ly, entries[i].colour, entries[i].dash, lx + 34, ly + 4,
+        html_escape(entries[i].label));
   }
   if (!s.fit)
     out += fmt::format(R"(<text x="{:.1f}" y="{:.1f}">no NASA fit (see below)</text>)", lx,
@@ -209,10 +226,11 @@ double max_Cp_error(const SpeciesFit& f) {
 std::string kJ(double J) { return fmt::format("{:.2f}", J / 1e3); }
 
 void summary_table(std::string& out, const std::vector<ReportSpecies>& species) {
-  out += "<h2 id=\"summary\">Summary</h2>\n<table class=\"summary\">\n<tr><th>species</th><th>formula</th>"
-         "<th>rotor</th><th>σ</th><th>ZPE / kJ mol⁻¹</th><th>S°(298.15 K) / J mol⁻¹ K⁻¹</th>"
-         "<th>Cp(298.15 K) / J mol⁻¹ K⁻¹</th><th>ΔfH°(298.15 K) / kJ mol⁻¹</th>"
-         "<th>fit: max Cp error</th><th>warnings</th></tr>\n";
+  out +=
+      "<h2 id=\"summary\">Summary</h2>\n<table class=\"summary\">\n<tr><th>species</th><th>formula</th>"
+      "<th>rotor</th><th>σ</th><th>ZPE / kJ mol⁻¹</th><th>S°(298.15 K) / J mol⁻¹ K⁻¹</th>"
+      "<th>Cp(298.15 K) / J mol⁻¹ K⁻¹</th><th>ΔfH°(298.15 K) / kJ mol⁻¹</th>"
+      "<th>fit: max Cp error</th><th>warnings</th></tr>\n";
   for (size_t i = 0; i < species.size(); ++i) {
     const ReportSpecies& s = species[i];
     const auto& f = s.facts;
@@ -223,8 +241,9 @@ void summary_table(std::string& out, const std::vector<ReportSpecies>& species) 
         "<tr><td><a href=\"#species-{}\">{}</a></td><td>{}</td><td>{}</td><td class=\"num\">{}</td>"
         "<td class=\"num\">{}</td><td class=\"num\">{:.2f}</td><td class=\"num\">{:.2f}</td>"
         "<td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td></tr>\n",
-        i + 1, html_escape(f.name), html_escape(f.formula.empty() ? "—" : f.formula), rotor_type_name(f.rotor),
-        f.symmetry_number, kJ(f.zero_point_energy_J_per_mol), s.at_298.S_J_per_mol_K, s.at_298.Cp_J_per_mol_K,
+        i + 1, html_escape(f.name), html_escape(f.formula.empty() ? "—" : f.formula),
+        rotor_type_name(f.rotor), f.symmetry_number, kJ(f.zero_point_energy_J_per_mol),
+        s.at_298.S_J_per_mol_K, s.at_298.Cp_J_per_mol_K,
         has_hf ? kJ(s.fit->enthalpy_of_formation_J_per_mol) : "not given", fit, warning_count(s));
   }
   out += "</table>\n";
@@ -233,26 +252,31 @@ void summary_table(std::string& out, const std::vector<ReportSpecies>& species) 
 void facts_list(std::string& out, const SpeciesFacts& f) {
   out += "<dl class=\"facts\">\n";
   fact(out, "formula", f.formula.empty() ? "unknown" : f.formula);
-  if (f.molar_mass_g_per_mol > 0) fact(out, "molar mass", fmt::format("{:.4f} g/mol", f.molar_mass_g_per_mol));
+  if (f.molar_mass_g_per_mol > 0)
+    fact(out, "molar mass", fmt::format("{:.4f} g/mol", f.molar_mass_g_per_mol));
   fact(out, "phase", f.phase);
   fact(out, "rotor", rotor_type_name(f.rotor));
   if (f.rotor != RotorType::atom) {
     fact(out, "principal moments",
-         fmt::format("{:.4f}, {:.4f}, {:.4f} amu Å²", f.moments_amu_A2[0], f.moments_amu_A2[1], f.moments_amu_A2[2]));
+         fmt::format("{:.4f}, {:.4f}, {:.4f} amu Å²", f.moments_amu_A2[0], f.moments_amu_A2[1],
+                     f.moments_amu_A2[2]));
     if (!f.rotational_constants_cm1.empty())
-      fact(out, "rotational constants", fmt::format("{:.5g} cm⁻¹", fmt::join(f.rotational_constants_cm1, ", ")));
+      fact(out, "rotational constants",
+           fmt::format("{:.5g} cm⁻¹", fmt::join(f.rotational_constants_cm1, ", ")));
   }
   fact(out, "symmetry number σ", fmt::format("{}", f.symmetry_number));
   fact(out, "ground-level degeneracy", fmt::format("{}", f.ground_degeneracy));
-  fact(out, "vibrational modes", fmt::format("{} given, {} expected, {} imaginary", f.given_modes, f.expected_modes,
-                                             f.imaginary_modes));
+  fact(
+      out, "vibrational modes",
+      fmt::format("{} given, {} expected, {} imaginary", f.given_modes, f.expected_modes, f.imaginary_modes));
   if (!f.frequencies_cm1.empty())
     fact(out, "wavenumbers used", fmt::format("{:.1f} cm⁻¹", fmt::join(f.frequencies_cm1, ", ")));
   fact(out, "zero-point energy", fmt::format("{} kJ/mol", kJ(f.zero_point_energy_J_per_mol)));
   out += "</dl>\n";
 }
 
-void list_items(std::string& out, const char* css_class, const char* title, const std::vector<std::string>& items) {
+void list_items(std::string& out, const char* css_class, const char* title,
+                const std::vector<std::string>& items) {
   if (items.empty()) return;
   out += fmt::format("<div class=\"{}\"><p><strong>{}</strong></p><ul>\n", css_class, title);
   for (const auto& item : items) out += fmt::format("<li>{}</li>\n", html_escape(item));
@@ -261,13 +285,15 @@ void list_items(std::string& out, const char* css_class, const char* title, cons
 
 void thermo_table(std::string& out, const std::vector<ThermoPoint>& rows) {
   if (rows.empty()) return;
-  out += "<table class=\"thermo\">\n<tr><th>T / K</th><th>Cp / J mol⁻¹ K⁻¹</th><th>S° / J mol⁻¹ K⁻¹</th>"
-         "<th>H − H(298.15 K) / kJ mol⁻¹</th><th>−[G − H(298.15 K)]/T / J mol⁻¹ K⁻¹</th></tr>\n";
+  out +=
+      "<table class=\"thermo\">\n<tr><th>T / K</th><th>Cp / J mol⁻¹ K⁻¹</th><th>S° / J mol⁻¹ K⁻¹</th>"
+      "<th>H − H(298.15 K) / kJ mol⁻¹</th><th>−[G − H(298.15 K)]/T / J mol⁻¹ K⁻¹</th></tr>\n";
   for (const auto& r : rows)
     out += fmt::format(
         "<tr><td class=\"num\">{:g}</td><td class=\"num\">{:.3f}</td><td class=\"num\">{:.3f}</td>"
         "<td class=\"num\">{:.3f}</td><td class=\"num\">{:.3f}</td></tr>\n",
-        r.T_K, r.Cp_J_per_mol_K, r.S_J_per_mol_K, r.H_minus_H298_J_per_mol / 1e3, r.gibbs_function_J_per_mol_K);
+        r.T_K, r.Cp_J_per_mol_K, r.S_J_per_mol_K, r.H_minus_H298_J_per_mol / 1e3,
+        r.gibbs_function_J_per_mol_K);
   out += "</table>\n";
 }
 
@@ -278,8 +304,9 @@ void nasa_part(std::string& out, const ReportSpecies& s) {
     return;
   }
   const SpeciesFit& f = *s.fit;
-  out += "<table class=\"fit-errors\">\n<tr><th>range / K</th><th>max Cp error</th><th>at T / K</th>"
-         "<th>rms Cp error</th><th>max H error / kJ mol⁻¹</th><th>max S error / J mol⁻¹ K⁻¹</th></tr>\n";
+  out +=
+      "<table class=\"fit-errors\">\n<tr><th>range / K</th><th>max Cp error</th><th>at T / K</th>"
+      "<th>rms Cp error</th><th>max H error / kJ mol⁻¹</th><th>max S error / J mol⁻¹ K⁻¹</th></tr>\n";
   for (const auto& e : f.fit.errors)
     out += fmt::format(
         "<tr><td>{:g}–{:g}</td><td class=\"num\">{:.3f} %</td><td class=\"num\">{:g}</td>"
@@ -290,10 +317,12 @@ void nasa_part(std::string& out, const ReportSpecies& s) {
   list_items(out, "warnings", "Fit warnings", f.fit.warnings);
   list_items(out, "notes", "Fit notes", f.notes);
   try {
-    out += fmt::format("<pre class=\"nasa7\">{}</pre>\n", html_escape(write_nasa7_record(std::get<Nasa7>(f.polynomial))));
+    out += fmt::format("<pre class=\"nasa7\">{}</pre>\n",
+                       html_escape(write_nasa7_record(std::get<Nasa7>(f.polynomial))));
   } catch (const InputError& e) {
     // The fit is sound but the fixed-column format cannot hold it (e.g. a long name).
-    out += fmt::format("<p class=\"not-fitted\">The NASA-7 record cannot be written: {}</p>\n", html_escape(e.what()));
+    out += fmt::format("<p class=\"not-fitted\">The NASA-7 record cannot be written: {}</p>\n",
+                       html_escape(e.what()));
   }
 }
 

@@ -22,9 +22,9 @@ struct CpCurvePoint {
 
 struct ReportSpecies {
   SpeciesFacts facts;
-  ThermoPoint at_298;                // the engine at 298.15 K (summary columns)
-  std::vector<ThermoPoint> table;    // at the requested temperatures
-  std::vector<CpCurvePoint> Cp_curve;  // ascending T, dense in ln T
+  ThermoPoint at_298;                     // the engine at 298.15 K (summary columns)
+  std::vector<ThermoPoint> table;         // at the requested temperatures
+  std::vector<CpCurvePoint> Cp_curve;     // ascending T, dense in ln T
   double classical_Cp_J_per_mol_K = 0.0;  // equipartition limit (Cv limit + R for a gas)
   ModesReport modes;                      // sampled densely for the picture
   std::optional<SpeciesFit> fit;          // NASA-7; absent when not fitted

@@ -1,4 +1,6 @@
 // vibtherm report: one self-contained HTML page for one or many species.
+#include "vibtherm/report.hpp"
+
 #include <fmt/format.h>
 #include <spdlog/spdlog.h>
 
@@ -6,7 +8,6 @@
 #include <memory>
 
 #include "common.hpp"
-#include "vibtherm/report.hpp"
 #include "vibtherm/write_report.hpp"
 
 namespace vibtherm::cli {
@@ -50,8 +51,8 @@ void setup_report(CLI::App& sub) {
     ReportOptions report;
     report.temperatures_K = temperatures_or(o->common, default_report_temperatures());
     report.fit.form = NasaForm::nasa7;
-    report.fit.range = o->range.empty() ? default_fit_range(NasaForm::nasa7)
-                                        : parse_fit_range(o->range, NasaForm::nasa7);
+    report.fit.range =
+        o->range.empty() ? default_fit_range(NasaForm::nasa7) : parse_fit_range(o->range, NasaForm::nasa7);
     report.fit.allow_missing_hf = o->allow_missing_hf;
 
     Batch batch = load_batch(o->common);
@@ -69,15 +70,16 @@ void setup_report(CLI::App& sub) {
     }
     const ModelOptions model = model_options(o->common);
     const auto& bp = report.fit.range.breakpoints_K;
-    ReportHeader header{VIBTHERM_VERSION,
-                        {"model: ideal gas (adsorbates: harmonic modes only), rigid rotor, harmonic oscillators, "
-                         "vibrational energies counted from the zero-point level",
-                         fmt::format("standard state: {}; frequency scale factor {:g}", standard_state_text(model),
-                                     model.frequency_scale),
-                         fmt::format("NASA-7 fit: {:g} to {:g} K, breakpoint {}; H(298.15 K) = ΔfH° from the input",
-                                     bp.front(), bp.back(),
-                                     report.fit.range.auto_index >= 0 ? std::string("searched")
-                                                                      : fmt::format("{:g} K", bp[1]))}};
+    ReportHeader header{
+        VIBTHERM_VERSION,
+        {"model: ideal gas (adsorbates: harmonic modes only), rigid rotor, harmonic oscillators, "
+         "vibrational energies counted from the zero-point level",
+         fmt::format("standard state: {}; frequency scale factor {:g}", standard_state_text(model),
+                     model.frequency_scale),
+         fmt::format(
+             "NASA-7 fit: {:g} to {:g} K, breakpoint {}; H(298.15 K) = ΔfH° from the input", bp.front(),
+             bp.back(),
+             report.fit.range.auto_index >= 0 ? std::string("searched") : fmt::format("{:g} K", bp[1]))}};
     write_output(o->common.output,
                  write_report_html(species, header,
                                    {o->axis == "linear" ? TemperatureAxis::linear : TemperatureAxis::log}));
