@@ -41,6 +41,16 @@ TEST_CASE("species names with markup characters are escaped everywhere") {
   CHECK(html.find("model &lt;line&gt; &amp; more") != std::string::npos);
 }
 
+TEST_CASE("a name the NASA-7 columns cannot hold keeps the fit and says why the record is missing") {
+  Species s = test::water();
+  s.name = "water <with blanks>";
+  const auto html = write_report_html({gather_report_species(prepare_species(s), options())}, header());
+  CHECK(html.find("The NASA-7 record cannot be written") != std::string::npos);
+  CHECK(html.find("<pre class=\"nasa7\">") == std::string::npos);
+  CHECK(html.find("class=\"fit-errors\"") != std::string::npos);
+  CHECK(html.find("<with") == std::string::npos);
+}
+
 TEST_CASE("page structure: one section per species, caution, inline pictures, no scripts") {
   const auto o = options();
   const std::vector<ReportSpecies> species{gather_report_species(prepare_species(test::water()), o),
