@@ -341,7 +341,7 @@ void temperature_axis(std::string& out, const SvgPanel& panel, double low, doubl
 
 // Heat map of Cv/R per mode; returns the height used.
 double svg_heat_map(std::string& out, const ModesReport& r, const std::vector<size_t>& order, double low,
-                    double high, double top) {
+                    double high, double top, const std::string& id_prefix) {
   const SvgPanel panel(low, high);
   const size_t n = r.modes.size();
   const double row = std::clamp(260.0 / static_cast<double>(n), 5.0, 26.0);
@@ -387,10 +387,10 @@ double svg_heat_map(std::string& out, const ModesReport& r, const std::vector<si
   const double bar_top = top, bar_height = std::max(height, 150.0);
   out += fmt::format(R"(<g class="legend"><text x="{:.1f}" y="{:.1f}" font-size="11">Cv/R of a mode</text>)",
                      legend_left, bar_top - 8);
-  out +=
-      fmt::format(R"~(<rect x="{:.1f}" y="{:.1f}" width="14" height="{:.1f}" fill="url(#activation-ramp)" )~"
-                  R"(stroke="black"/>)",
-                  legend_left, bar_top, bar_height);
+  out += fmt::format(
+      R"~(<rect x="{:.1f}" y="{:.1f}" width="14" height="{:.1f}" fill="url(#{}activation-ramp)" )~"
+      R"(stroke="black"/>)",
+      legend_left, bar_top, bar_height, xml_escape(id_prefix));
   const std::array<std::pair<double, std::string>, 5> marks{{
       {0.0, "0"},
       {r.thresholds.frozen_below_Cv_over_R,
@@ -507,7 +507,7 @@ double svg_dof_curve(std::string& out, const ModesReport& r, const std::vector<s
 
 }  // namespace
 
-std::string modes_to_svg(const std::vector<ModesReport>& reports) {
+std::string modes_to_svg(const std::vector<ModesReport>& reports, const ModesSvgOptions& options) {
   std::string body;
   double y = 0.0;
   for (const ModesReport& r : reports) {
@@ -527,17 +527,20 @@ std::string modes_to_svg(const std::vector<ModesReport>& reports) {
                         20.0, y + 26, xml_escape(r.name), phase_name(r), whole(r.classical.total));
     body += '\n';
     y += 58;
-    if (!r.modes.empty()) y += svg_heat_map(body, r, order, low, high, y) + 64;
+    if (!r.modes.empty()) y += svg_heat_map(body, r, order, low, high, y, options.id_prefix) + 64;
     y += svg_dof_curve(body, r, order, low, high, y) + 24;
     body += "</g>\n";
   }
-  std::string out = R"(<?xml version="1.0" encoding="UTF-8"?>)";
-  out += '\n';
-  out += fmt::format(R"(<svg xmlns="http://www.w3.org/2000/svg" width="{0:.0f}" height="{1:.0f}" )"
+  std::string out;
+  if (options.standalone) out = "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n";
+  out += fmt::format(R"(<svg{2} width="{0:.0f}" height="{1:.0f}" )"
                      R"(viewBox="0 0 {0:.0f} {1:.0f}" font-family="sans-serif">)",
-                     canvas_width, std::max(y, 40.0));
+                     canvas_width, std::max(y, 40.0),
+                     options.standalone ? R"( xmlns="http://www.w3.org/2000/svg")" : "");
   out += "\n<title>vibtherm modes: activation of vibrations and effective degrees of freedom</title>\n";
-  out += R"(<defs><linearGradient id="activation-ramp" x1="0" y1="1" x2="0" y2="0">)";
+  out += R"(<defs><linearGradient id=")";
+  out += xml_escape(options.id_prefix);
+  out += R"(activation-ramp" x1="0" y1="1" x2="0" y2="0">)";
   for (const auto& stop : ramp)
     out += fmt::format(R"(<stop offset="{:g}" stop-color="{}"/>)", stop.first, ramp_colour(stop.first));
   out += "</linearGradient></defs>\n";

@@ -27,7 +27,13 @@ std::string modes_to_json(const std::vector<ModesReport>& reports);
 // Per species: a heat map of each mode's Cv/R versus T (log axis) and the curve F(T) with
 // the classical plateaus. The reports should be sampled densely in ln T (see
 // log_spaced_temperatures); each point becomes one column of the heat map.
-std::string modes_to_svg(const std::vector<ModesReport>& reports);
+struct ModesSvgOptions {
+  // false: an <svg> element to place inside an HTML page, without the XML declaration
+  // and namespace attribute (the HTML parser supplies the namespace).
+  bool standalone = true;
+  std::string id_prefix;  // prepended to element ids, unique when several pictures share a page
+};
+std::string modes_to_svg(const std::vector<ModesReport>& reports, const ModesSvgOptions& options = {});
 
 // The temperature span a picture shows for the requested temperatures: their range,
 // widened geometrically about its centre to at least one decade so the activation of a

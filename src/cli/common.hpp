@@ -72,5 +72,6 @@ void setup_table(CLI::App& sub);
 void setup_fit(CLI::App& sub);
 void setup_eval(CLI::App& sub);
 void setup_modes(CLI::App& sub);
+void setup_report(CLI::App& sub);
 
 }  // namespace vibtherm::cli

@@ -25,6 +25,9 @@ constexpr SubcommandEntry subcommands[] = {
     {"eval", "tabulate the species of an existing NASA-7 / NASA-9 file", vibtherm::cli::setup_eval},
     {"modes", "per-mode activation and effective quadratic degrees of freedom F = 2 Cv/R versus temperature",
      vibtherm::cli::setup_modes},
+    {"report",
+     "self-contained HTML page (inline SVG plots) for one or many species: facts, Cp(T), modes, NASA-7",
+     vibtherm::cli::setup_report},
 };
 
 }  // namespace
