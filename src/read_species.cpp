@@ -208,7 +208,13 @@ const std::vector<std::string> yaml_keys = {"name",
                                             "hessian",
                                             "hessian_unit"};
 // Part of the format (design.md section 4) but not computed by this version.
-const std::set<std::string> unsupported_keys = {"hindered_rotors", "hessian", "hessian_unit"};
+const std::set<std::string> unsupported_keys = {"hindered_rotors"};
+
+// A full Hessian may differ from its transpose by this much, relative to its largest
+// element, and is then symmetrised: finite-difference Hessians and values printed to five
+// or six significant digits are slightly asymmetric, while a misordered or transposed
+// block is asymmetric at the size of the elements themselves.
+constexpr double hessian_symmetry_tolerance = 1e-4;
 
 // Records where the documents of a YAML text start, through yaml-cpp's event parser.
 // yaml-cpp 0.7 never consumes a ',' where a document's root node should start (", 1",
@@ -288,6 +294,8 @@ class YamlReader {
   double enthalpy(const YAML::Node& node) const;
   std::vector<double> positive_list(const YAML::Node& node, const std::string& what) const;
   std::map<std::string, int> formula(const YAML::Node& node) const;
+  std::vector<double> hessian(const YAML::Node& node, const YAML::Node* unit_node,
+                              std::size_t atom_count) const;
 
   std::string file_;
 };
@@ -580,6 +588,60 @@ std::map<std::string, int> YamlReader::formula(const YAML::Node& node) const {
   return out;
 }
 
+// The flat `hessian` list: the full 3N×3N matrix row-major, or its lower triangle row by
+// row (H11, H21, H22, H31, ...). Returns the full matrix, row-major, in J/m².
+std::vector<double> YamlReader::hessian(const YAML::Node& node, const YAML::Node* unit_node,
+                                        std::size_t atom_count) const {
+  double factor = *to_force_constant_J_per_m2(1.0, "hartree/bohr^2");
+  if (unit_node) {
+    std::string unit = text(*unit_node, "'hessian_unit'");
+    std::optional<double> f = to_force_constant_J_per_m2(1.0, unit);
+    if (!f)
+      error(*unit_node,
+            "unknown Hessian unit " + quote(unit) + ", expected one of " + force_constant_units_list());
+    factor = *f;
+  }
+  if (!node.IsSequence())
+    error(node, "'hessian' is " + describe(node) +
+                    ", expected a flat list of numbers (full 3N×3N matrix row-major, or its lower triangle)");
+  const std::size_t n = 3 * atom_count;
+  const std::size_t full = n * n;
+  const std::size_t triangle = n * (n + 1) / 2;
+  if (node.size() != full && node.size() != triangle)
+    error(node, "'hessian' has " + std::to_string(node.size()) + " values, expected " + std::to_string(full) +
+                    " (full 3N×3N matrix, row-major) or " + std::to_string(triangle) +
+                    " (lower triangle, row by row) for N = " + std::to_string(atom_count) + " atoms");
+  std::vector<double> values;
+  std::vector<YAML::Node> nodes;
+  for (const YAML::Node& item : node) {
+    values.push_back(number(item, "Hessian value " + std::to_string(values.size() + 1)));
+    nodes.push_back(item);
+  }
+  std::vector<double> out(full);
+  if (values.size() == triangle) {
+    std::size_t k = 0;
+    for (std::size_t i = 0; i < n; ++i)
+      for (std::size_t j = 0; j <= i; ++j, ++k) out[i * n + j] = out[j * n + i] = values[k] * factor;
+    return out;
+  }
+  double largest = 0.0;
+  for (double v : values) largest = std::max(largest, std::abs(v));
+  for (std::size_t i = 0; i < n; ++i)
+    for (std::size_t j = 0; j < i; ++j) {
+      const double lower = values[i * n + j];
+      const double upper = values[j * n + i];
+      if (std::abs(lower - upper) > hessian_symmetry_tolerance * largest)
+        error(nodes[i * n + j], "'hessian' is not symmetric: row " + std::to_string(i + 1) + ", column " +
+                                    std::to_string(j + 1) + " is " + quote(nodes[i * n + j].Scalar()) +
+                                    " but row " + std::to_string(j + 1) + ", column " +
+                                    std::to_string(i + 1) + " is " + quote(nodes[j * n + i].Scalar()) +
+                                    ", expected equal values (within 1e-4 of the largest element)");
+      out[i * n + j] = out[j * n + i] = 0.5 * (lower + upper) * factor;
+    }
+  for (std::size_t i = 0; i < n; ++i) out[i * n + i] = values[i * n + i] * factor;
+  return out;
+}
+
 Species YamlReader::read(const std::string& text) {
   require_text(text, file_);
   YAML::Node root;
@@ -697,7 +759,20 @@ Species YamlReader::read(const std::string& text) {
                     std::string("(or 'mass' with 'rotational_constants' or 'moments_of_inertia')"));
   }
 
-  if (const YAML::Node* f = find(e, "frequencies")) {
+  const YAML::Node* hessian_node = find(e, "hessian");
+  const YAML::Node* hessian_unit = find(e, "hessian_unit");
+  if (hessian_node && find(e, "frequencies"))
+    error(
+        e["hessian"].key,
+        "both 'frequencies' and 'hessian' given, expected one of them (the Hessian yields the frequencies)");
+  if (hessian_unit && !hessian_node)
+    error(e["hessian_unit"].key, "'hessian_unit' without 'hessian', expected a 'hessian' list beside it");
+  if (hessian_node) {
+    if (species.atoms.empty())
+      error(e["hessian"].key,
+            "'hessian' needs 'atoms', expected Cartesian coordinates of the atoms the Hessian refers to");
+    species.hessian_J_per_m2 = hessian(*hessian_node, hessian_unit, species.atoms.size());
+  } else if (const YAML::Node* f = find(e, "frequencies")) {
     for (const Located& nu : wavenumbers(*f, "'frequencies'", false)) {
       if (nu.value == 0.0)
         error(nu.node, "frequency " + std::to_string(species.frequencies_cm1.size() + 1) +
@@ -706,7 +781,7 @@ Species YamlReader::read(const std::string& text) {
     }
   } else if (!monatomic) {
     error(root, "missing required key 'frequencies', expected a list of wavenumbers in cm^-1 " +
-                    std::string("(only a single atom has none)"));
+                    std::string("or a 'hessian' (only a single atom has neither)"));
   }
 
   if (const YAML::Node* s = find(e, "symmetry_number"))

@@ -5,6 +5,8 @@
 #include <algorithm>
 #include <cmath>
 
+#include "vibtherm/hessian.hpp"
+
 namespace vibtherm {
 
 namespace c = constants;
@@ -79,6 +81,44 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
                      p.species.name, join_wavenumbers(rejected)));
 }
 
+// Replaces the species' frequencies by the harmonic wavenumbers of its Hessian, with the
+// external motions of its phase and rotor type projected out (hessian.hpp).
+void frequencies_from_hessian(PreparedSpecies& p) {
+  const Species& s = p.species;
+  const std::size_t n = 3 * s.atoms.size();
+  if (s.atoms.empty() || s.hessian_J_per_m2->size() != n * n)
+    fail(s.origin, fmt::format("species '{}' has a Hessian of {} values for {} atoms, expected {} (3N×3N)",
+                               s.name, s.hessian_J_per_m2->size(), s.atoms.size(), n * n));
+  const Eigen::Index size = static_cast<Eigen::Index>(n);
+  const Eigen::MatrixXd hessian =
+      Eigen::Map<const Eigen::Matrix<double, Eigen::Dynamic, Eigen::Dynamic, Eigen::RowMajor>>(
+          s.hessian_J_per_m2->data(), size, size);
+  std::vector<double> masses_amu;
+  std::vector<Eigen::Vector3d> positions_angstrom;
+  for (const Atom& a : s.atoms) {
+    masses_amu.push_back(a.mass_amu);
+    positions_angstrom.push_back(a.position_angstrom);
+  }
+  ExternalMotions external = ExternalMotions::none;
+  if (p.is_gas) {
+    switch (p.rotor.type) {
+      case RotorType::atom:
+        external = ExternalMotions::atom;
+        break;
+      case RotorType::linear:
+        external = ExternalMotions::linear;
+        break;
+      case RotorType::nonlinear:
+        external = ExternalMotions::nonlinear;
+        break;
+    }
+  }
+  p.species.frequencies_cm1 = harmonic_wavenumbers_cm1(hessian, masses_amu, positions_angstrom, external);
+  p.notes.push_back(
+      fmt::format("{} harmonic frequencies from the Cartesian Hessian ({} external motions projected out)",
+                  p.species.frequencies_cm1.size(), external_motion_count(external)));
+}
+
 // Thermal functions at T without the H(298.15) reference.
 ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
   ThermoPoint point;
@@ -119,14 +159,15 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
     fail(species.origin,
          fmt::format("symmetry number must be a positive integer, got {}", species.symmetry_number));
   p.rotor = analyse_rotor(species, options.linear_tolerance_amu_A2);
+  if (species.hessian_J_per_m2) frequencies_from_hessian(p);
 
   std::vector<double> scaled;
-  for (double v : species.frequencies_cm1) scaled.push_back(v * options.frequency_scale);
+  for (double v : p.species.frequencies_cm1) scaled.push_back(v * options.frequency_scale);
   if (options.frequency_scale != 1.0)
     p.notes.push_back(fmt::format("wavenumbers scaled by {}", options.frequency_scale));
 
   const int expected = expected_vibration_count(species, p.rotor.type);
-  const int given = static_cast<int>(species.frequencies_cm1.size());
+  const int given = static_cast<int>(p.species.frequencies_cm1.size());
   if (expected >= 0 && given != expected) {
     const std::string message =
         fmt::format("species '{}' has {} vibrational frequencies, expected {} ({}, N = {})", species.name,

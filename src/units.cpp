@@ -40,6 +40,15 @@ constexpr UnitFactor energy_units[] = {
     {"hartree", hartree_J* avogadro_per_mol},
 };
 
+// Force constants (energy per length squared) to J/m² = N/m: hartree/bohr² from the CODATA
+// 2018 hartree and Bohr radius; molar units per molecule through N_A; 1 Å = 1e-10 m.
+constexpr UnitFactor force_constant_units[] = {
+    {"hartree/bohr^2", hartree_J / (bohr_radius_m * bohr_radius_m)},
+    {"kcal/mol/A^2", 1e3 * calorie_J / avogadro_per_mol / (angstrom_m * angstrom_m)},
+    {"kJ/mol/A^2", 1e3 / avogadro_per_mol / (angstrom_m * angstrom_m)},
+    {"J/m^2", 1.0},
+};
+
 constexpr UnitFactor pressure_units[] = {
     {"Pa", 1.0},
     {"hPa", 1e2},
@@ -124,6 +133,11 @@ std::optional<double> to_energy_J_per_mol(double value, std::string_view unit) {
   return std::nullopt;
 }
 
+std::optional<double> to_force_constant_J_per_m2(double value, std::string_view unit) {
+  if (auto f = factor_of(force_constant_units, unit)) return value * *f;
+  return std::nullopt;
+}
+
 std::optional<double> parse_pressure_Pa(std::string_view text) { return parse_pressure(text).value_Pa; }
 
 double parse_pressure_Pa_or_throw(std::string_view text) {
@@ -148,5 +162,6 @@ std::optional<double> parse_number(std::string_view text) {
 std::string wavenumber_units_list() { return names_of(wavenumber_units); }
 std::string energy_units_list() { return names_of(energy_units); }
 std::string pressure_units_list() { return names_of(pressure_units); }
+std::string force_constant_units_list() { return names_of(force_constant_units); }
 
 }  // namespace vibtherm

@@ -3,8 +3,11 @@
 #include <doctest/doctest.h>
 
 #include <clocale>
+#include <cmath>
 #include <filesystem>
 #include <fstream>
+
+#include "vibtherm/constants.hpp"
 
 using namespace vibtherm;
 
@@ -175,9 +178,10 @@ TEST_CASE("YAML: error messages carry line and column") {
         "in.yaml: error: file holds no species, expected a YAML map with at least 'name' and 'atoms'");
   CHECK(yaml_error("- a\n- b\n") ==
         "in.yaml:1:1: error: top level is a list, expected a map of species keys such as 'name' and 'atoms'");
-  CHECK(yaml_error("name: w\nhessian: [1, 2]\n") ==
-        "in.yaml:2:1: error: key 'hessian' is recognised but not supported by this version of vibtherm, "
-        "expected 'frequencies' (and rigid rotors only)");
+  CHECK(
+      yaml_error("name: w\nmass: 4\nhessian: [1, 2]\n") ==
+      "in.yaml:3:1: error: 'hessian' needs 'atoms', expected Cartesian coordinates of the atoms the Hessian "
+      "refers to");
   CHECK(yaml_error(std::string("name: w\0\n", 9)) ==
         "in.yaml:1:8: error: not a text file (NUL byte or invalid UTF-8), expected a UTF-8 species "
         "description");
@@ -186,7 +190,7 @@ TEST_CASE("YAML: error messages carry line and column") {
         "description");
   CHECK(yaml_error("name: w\n" + water_atoms) ==
         "in.yaml:1:1: error: missing required key 'frequencies', expected a list of wavenumbers in cm^-1 "
-        "(only a single atom has none)");
+        "or a 'hessian' (only a single atom has neither)");
   CHECK(yaml_error("name: w\nmass: -4\n") ==
         "in.yaml:2:7: error: 'mass' is '-4', expected a positive number");
   CHECK(yaml_error("name: w\n---\nname: v\n") ==
@@ -270,4 +274,54 @@ TEST_CASE("numbers do not depend on the C locale") {
   CHECK(s.atoms[1].position_angstrom.y() == 0.756950);
   std::setlocale(LC_NUMERIC, saved.c_str());
   if (!switched) MESSAGE("no decimal-comma locale installed; checked in the C locale only");
+}
+
+TEST_CASE("YAML: a Hessian, as lower triangle or full matrix, read the same") {
+  const Species triangle = read_species_file(data_dir + "/water-model-hessian.yaml");
+  const Species full = read_species_file(data_dir + "/water-model-hessian-full.yaml");
+  REQUIRE(triangle.hessian_J_per_m2.has_value());
+  REQUIRE(full.hessian_J_per_m2.has_value());
+  CHECK(triangle.frequencies_cm1.empty());
+  REQUIRE(triangle.hessian_J_per_m2->size() == 81);
+  CHECK(*triangle.hessian_J_per_m2 == *full.hessian_J_per_m2);
+  // Row 2, column 2 as written (hartree/bohr²), converted with CODATA 2018 E_h / a0².
+  const double hartree_per_bohr2 =
+      constants::hartree_J / (constants::bohr_radius_m * constants::bohr_radius_m);
+  CHECK((*triangle.hessian_J_per_m2)[1 * 9 + 1] ==
+        doctest::Approx(0.6788241823 * hartree_per_bohr2).epsilon(1e-15));
+  // Lower triangle mirrored: row 5, column 2 is row 2, column 5.
+  CHECK((*triangle.hessian_J_per_m2)[4 * 9 + 1] == (*triangle.hessian_J_per_m2)[1 * 9 + 4]);
+}
+
+TEST_CASE("YAML: Hessian units and errors") {
+  const std::string one_atom = "name: x\natoms:\n  - [Ar, 0, 0, 0]\n";
+  const std::string triangle = "hessian: [1, 0, 2, 0, 0, 3]\n";
+  const Species hartree = read_species_yaml(one_atom + triangle, "in.yaml");
+  const Species kJ = read_species_yaml(one_atom + triangle + "hessian_unit: kJ/mol/A^2\n", "in.yaml");
+  const Species si = read_species_yaml(one_atom + triangle + "hessian_unit: J/m^2\n", "in.yaml");
+  CHECK((*si.hessian_J_per_m2)[8] == 3.0);
+  // 1 kJ/mol/Å² = 1e3 / N_A / 1e-20 J/m² (definition; N_A exact).
+  CHECK((*kJ.hessian_J_per_m2)[8] ==
+        doctest::Approx(3e3 / constants::avogadro_per_mol / 1e-20).epsilon(1e-14));
+  CHECK((*hartree.hessian_J_per_m2)[4] ==
+        doctest::Approx(2.0 * constants::hartree_J / std::pow(constants::bohr_radius_m, 2)).epsilon(1e-14));
+
+  CHECK(yaml_error(one_atom + "hessian: [1, 2]\n") ==
+        "in.yaml:4:10: error: 'hessian' has 2 values, expected 9 (full 3N×3N matrix, row-major) or 6 (lower "
+        "triangle, row by row) for N = 1 atoms");
+  CHECK(
+      yaml_error(one_atom + "hessian: [1, 0, 0, 0.5, 2, 0, 0, 0, 3]\n") ==
+      "in.yaml:4:20: error: 'hessian' is not symmetric: row 2, column 1 is '0.5' but row 1, column 2 is '0', "
+      "expected equal values (within 1e-4 of the largest element)");
+  CHECK(yaml_error(one_atom + "hessian: [1, 0, .nan, 0, 0, 3]\n") ==
+        "in.yaml:4:17: error: Hessian value 3 is '.nan', expected a finite number");
+  CHECK(yaml_error(one_atom + triangle + "hessian_unit: mdyn/A\n") ==
+        "in.yaml:5:15: error: unknown Hessian unit 'mdyn/A', expected one of hartree/bohr^2, kcal/mol/A^2, "
+        "kJ/mol/A^2, J/m^2");
+  CHECK(
+      yaml_error(one_atom + "frequencies: [100]\n" + triangle) ==
+      "in.yaml:5:1: error: both 'frequencies' and 'hessian' given, expected one of them (the Hessian yields "
+      "the frequencies)");
+  CHECK(yaml_error(one_atom + "hessian_unit: J/m^2\n") ==
+        "in.yaml:4:1: error: 'hessian_unit' without 'hessian', expected a 'hessian' list beside it");
 }

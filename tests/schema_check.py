@@ -22,6 +22,9 @@ import yaml
 # 'linear' against the number of rotational values, zero frequencies, coordinates.
 SCHEMA_REJECTS = [
     "atoms_not_a_list.yaml",
+    "hessian_and_frequencies.yaml",
+    "hessian_unit_unknown.yaml",
+    "hessian_without_atoms.yaml",
     "missing_atoms.yaml",
     "missing_name.yaml",
     "negative_mass.yaml",

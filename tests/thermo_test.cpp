@@ -3,9 +3,13 @@
 #include <doctest/doctest.h>
 
 #include <Eigen/Geometry>
+#include <cmath>
+#include <fstream>
+#include <iterator>
 
 #include "test_species.hpp"
 #include "vibtherm/constants.hpp"
+#include "vibtherm/read_species.hpp"
 
 using namespace vibtherm;
 constexpr double R = constants::gas_constant_J_per_mol_K;
@@ -121,4 +125,27 @@ TEST_CASE("Gibbs functions are consistent") {
   CHECK(row.gibbs_function_J_per_mol_K ==
         doctest::Approx(row.S_J_per_mol_K - row.H_minus_H298_J_per_mol / 1500.0).epsilon(1e-12));
   CHECK_THROWS_AS(evaluate(prepare_species(test::water()), 0.0), InputError);
+}
+
+TEST_CASE("a Hessian gives the frequencies once the rotor type is known") {
+  const std::string path = std::string(VIBTHERM_TEST_DATA) + "/water-model-hessian.yaml";
+  const PreparedSpecies h2o = prepare_species(read_species_file(path));
+  REQUIRE(h2o.species.frequencies_cm1.size() == 3);  // 3N − 6 for a nonlinear molecule
+  CHECK(h2o.vibrations_cm1 == h2o.species.frequencies_cm1);
+  for (double v : h2o.vibrations_cm1) CHECK(v > 1000.0);  // the model has no soft mode
+  CHECK(h2o.zero_point_energy_J_per_mol > 0.0);
+
+  // The same Hessian with deuterium masses: every wavenumber falls by a factor between
+  // 1/sqrt(2) (infinitely heavy oxygen) and 1 (common practice), and so does the ZPE.
+  std::ifstream in(path);
+  const std::string text((std::istreambuf_iterator<char>(in)), std::istreambuf_iterator<char>());
+  const PreparedSpecies d2o = prepare_species(read_species_yaml(text + "isotopes: {2: D, 3: D}\n", path));
+  REQUIRE(d2o.vibrations_cm1.size() == 3);
+  for (int i = 0; i < 3; ++i) {
+    CHECK(d2o.vibrations_cm1[i] / h2o.vibrations_cm1[i] > 1.0 / std::sqrt(2.0));
+    CHECK(d2o.vibrations_cm1[i] / h2o.vibrations_cm1[i] < 1.0);
+  }
+  CHECK(d2o.zero_point_energy_J_per_mol < h2o.zero_point_energy_J_per_mol);
+  // Cp at 1000 K rises with the softer modes (more of each is active).
+  CHECK(evaluate(d2o, 1000.0).Cp_J_per_mol_K > evaluate(h2o, 1000.0).Cp_J_per_mol_K);
 }

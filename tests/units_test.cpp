@@ -34,10 +34,23 @@ TEST_CASE("molar energy units") {
   CHECK_FALSE(to_energy_J_per_mol(1.0, "cal").has_value());
 }
 
+TEST_CASE("force constant units") {
+  // 1 hartree/bohr² = 1556.893 N/m, i.e. 15.569 mdyn/Å (E_h / a0², CODATA 2018; from memory).
+  CHECK(*to_force_constant_J_per_m2(1.0, "hartree/bohr^2") == doctest::Approx(1556.893).epsilon(1e-6));
+  // 1 kcal/mol/Å² = 4184 J / (6.02214076e23 · 1e-20 m²) = 0.6947695 N/m (exact definitions of
+  // the thermochemical calorie, N_A and the ångström, worked out by hand).
+  CHECK(*to_force_constant_J_per_m2(1.0, "kcal/mol/A^2") == doctest::Approx(0.6947695).epsilon(1e-6));
+  CHECK(*to_force_constant_J_per_m2(4.184, "kJ/mol/A^2") ==
+        doctest::Approx(*to_force_constant_J_per_m2(1.0, "kcal/mol/A^2")).epsilon(1e-15));
+  CHECK(*to_force_constant_J_per_m2(500.0, "J/m^2") == 500.0);
+  CHECK_FALSE(to_force_constant_J_per_m2(1.0, "mdyn/A").has_value());
+}
+
 TEST_CASE("unit lists name every unit") {
   CHECK(wavenumber_units_list() == "cm^-1, cm-1, 1/cm, GHz, MHz, meV, K");
   CHECK(energy_units_list() == "kJ/mol, kcal/mol, J/mol, eV, hartree");
   CHECK(pressure_units_list() == "Pa, hPa, kPa, MPa, mbar, bar, atm, Torr");
+  CHECK(force_constant_units_list() == "hartree/bohr^2, kcal/mol/A^2, kJ/mol/A^2, J/m^2");
 }
 
 TEST_CASE("pressure text") {

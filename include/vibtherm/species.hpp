@@ -42,6 +42,10 @@ struct Species {
   std::optional<RigidRotorData> rotor_data;
   std::map<std::string, int> formula;   // element -> count; from atoms or `formula`
   std::vector<double> frequencies_cm1;  // as given; negative = imaginary
+  // Cartesian Hessian instead of frequencies: 3N×3N, row-major, x1 y1 z1 x2 ..., in J/m²
+  // (energy per molecule). prepare_species (thermo.hpp) turns it into frequencies once the
+  // phase and rotor type are known, with the atoms' (isotope) masses.
+  std::optional<std::vector<double>> hessian_J_per_m2;
   int symmetry_number = 1;
   std::vector<ElectronicLevel> electronic_levels{{0.0, 1}};
   std::optional<double> enthalpy_of_formation_J_per_mol;  // ΔfH°(298.15 K)

@@ -18,6 +18,11 @@ std::optional<double> to_wavenumber_cm1(double value, std::string_view unit);
 // unknown unit.
 std::optional<double> to_energy_J_per_mol(double value, std::string_view unit);
 
+// Force constants (Hessian elements), energy per length squared: "hartree/bohr^2",
+// "kcal/mol/A^2", "kJ/mol/A^2" (molar energies per molecule), "J/m^2" (SI, = N/m).
+// Returns J/m², or nullopt for an unknown unit.
+std::optional<double> to_force_constant_J_per_m2(double value, std::string_view unit);
+
 // Pressure text: a number, optional blanks, and a unit, as in "1bar", "1 atm",
 // "101325Pa", "100kPa", "1e5 Pa". Units: Pa, hPa, kPa, MPa, mbar, bar, atm, Torr.
 // A bare number is refused rather than guessed: "1" could mean 1 bar or 1 Pa, five
@@ -36,5 +41,6 @@ std::optional<double> parse_number(std::string_view text);
 std::string wavenumber_units_list();
 std::string energy_units_list();
 std::string pressure_units_list();
+std::string force_constant_units_list();
 
 }  // namespace vibtherm

@@ -78,6 +78,44 @@ def s_at(*extra):
     return json.loads(r.stdout)["species"][0]["rows"][0]["S"]
 check("1 atm standard state", abs(s_at() - s_at("--standard-state", "atm") - 8.314462618 * 0.013163) < 1e-3)
 
+# A Hessian replaces frequencies (tests/data/water-model-hessian*.yaml: a model force field).
+data = os.path.join(root, "tests", "data")
+hessian_triangle = os.path.join(data, "water-model-hessian.yaml")
+hessian_full = os.path.join(data, "water-model-hessian-full.yaml")
+
+
+def table_rows(path):
+    r = run("table", path, "--temps", "298.15,1000,3000", "--format", "json")
+    return json.loads(r.stdout)["species"][0]["rows"] if r.returncode == 0 else [r.stderr]
+
+
+def inspect_of(path):
+    r = run("inspect", path, "--format", "json")
+    return json.loads(r.stdout)["species"][0] if r.returncode == 0 else {"error": r.stderr}
+
+
+check("hessian: lower triangle and full matrix give the same table",
+      table_rows(hessian_triangle) == table_rows(hessian_full), str(table_rows(hessian_triangle)))
+h2o = inspect_of(hessian_triangle)
+check("hessian: 3N-6 frequencies", len(h2o.get("frequencies", [])) == 3, str(h2o))
+with tempfile.TemporaryDirectory() as tmp:
+    # The same species given by the frequencies the Hessian yields: the same table.
+    text = open(hessian_triangle).read()
+    head = text[:text.index("hessian_unit:")]
+    by_frequencies = os.path.join(tmp, "f.yaml")
+    open(by_frequencies, "w").write(head + "frequencies: " + json.dumps(h2o.get("frequencies", [])) + "\n")
+    a, b = table_rows(hessian_triangle), table_rows(by_frequencies)
+    check("hessian: same table as its frequencies",
+          len(a) == len(b) == 3 and all(abs(x["Cp"] - y["Cp"]) < 1e-9 and abs(x["S"] - y["S"]) < 1e-9
+                                        for x, y in zip(a, b)), f"{a} {b}")
+    # Isotopes change the masses, so one Hessian gives D2O's frequencies too.
+    d2o_path = os.path.join(tmp, "d2o.yaml")
+    open(d2o_path, "w").write(text + "isotopes: {2: D, 3: D}\n")
+    d2o = inspect_of(d2o_path)
+    ratios = [d / h for d, h in zip(d2o.get("frequencies", []), h2o.get("frequencies", []))]
+    check("hessian: D2O frequencies between 1/sqrt(2) and 1 of H2O's",
+          len(ratios) == 3 and all(0.5 ** 0.5 < q < 1.0 for q in ratios), f"{ratios} {d2o}")
+
 failed = results.count(False)
 print(f"{len(results) - failed} passed, {failed} failed")
 sys.exit(1 if failed else 0)
