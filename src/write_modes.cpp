@@ -11,6 +11,7 @@
 #include <tuple>
 
 #include "vibtherm/geometry.hpp"
+#include "vibtherm/markup.hpp"
 
 namespace vibtherm {
 
@@ -231,32 +232,6 @@ std::pair<double, double> svg_temperature_span_K(const std::vector<double>& requ
 
 namespace {
 
-std::string xml_escape(const std::string& text) {
-  std::string out;
-  for (char c : text) {
-    switch (c) {
-      case '&':
-        out += "&amp;";
-        break;
-      case '<':
-        out += "&lt;";
-        break;
-      case '>':
-        out += "&gt;";
-        break;
-      case '"':
-        out += "&quot;";
-        break;
-      case '\'':
-        out += "&apos;";
-        break;
-      default:
-        out += c;
-    }
-  }
-  return out;
-}
-
 struct Rgb {
   double r, g, b;
 };
@@ -390,7 +365,7 @@ double svg_heat_map(std::string& out, const ModesReport& r, const std::vector<si
   out += fmt::format(
       R"~(<rect x="{:.1f}" y="{:.1f}" width="14" height="{:.1f}" fill="url(#{}activation-ramp)" )~"
       R"(stroke="black"/>)",
-      legend_left, bar_top, bar_height, xml_escape(id_prefix));
+      legend_left, bar_top, bar_height, escape_markup(id_prefix));
   const std::array<std::pair<double, std::string>, 5> marks{{
       {0.0, "0"},
       {r.thresholds.frozen_below_Cv_over_R,
@@ -405,7 +380,7 @@ double svg_heat_map(std::string& out, const ModesReport& r, const std::vector<si
     out += fmt::format(R"(<line x1="{:.1f}" y1="{:.1f}" x2="{:.1f}" y2="{:.1f}" stroke="black"/>)",
                        legend_left + 14, y, legend_left + 18, y);
     out += fmt::format(R"(<text x="{:.1f}" y="{:.1f}" font-size="10">{}</text>)", legend_left + 21, y + 3.5,
-                       xml_escape(label));
+                       escape_markup(label));
   }
   out +=
       fmt::format(R"(<circle cx="{:.1f}" cy="{:.1f}" r="3" fill="none" stroke="black"/>)"
@@ -465,7 +440,7 @@ double svg_dof_curve(std::string& out, const ModesReport& r, const std::vector<s
                        R"(stroke-dasharray="6 4"/>)",
                        plot_left, y(value), plot_right, y(value));
     out += fmt::format(R"(<text x="{:.1f}" y="{:.1f}" font-size="10" fill="#555555">{}</text>)",
-                       plot_right + 4, y(value) + 3.5, xml_escape(label));
+                       plot_right + 4, y(value) + 3.5, escape_markup(label));
   }
   out += "</g>\n";
 
@@ -521,10 +496,10 @@ std::string modes_to_svg(const std::vector<ModesReport>& reports, const ModesSvg
       low /= std::sqrt(10.0);
       high = low * 10.0;
     }
-    body += fmt::format(R"(<g class="species" data-name="{}">)", xml_escape(r.name));
+    body += fmt::format(R"(<g class="species" data-name="{}">)", escape_markup(r.name));
     body += fmt::format(R"(<text x="{:.1f}" y="{:.1f}" font-size="15" font-weight="bold">{} ({}, classical )"
                         R"(F = {})</text>)",
-                        20.0, y + 26, xml_escape(r.name), phase_name(r), whole(r.classical.total));
+                        20.0, y + 26, escape_markup(r.name), phase_name(r), whole(r.classical.total));
     body += '\n';
     y += 58;
     if (!r.modes.empty()) y += svg_heat_map(body, r, order, low, high, y, options.id_prefix) + 64;
@@ -539,7 +514,7 @@ std::string modes_to_svg(const std::vector<ModesReport>& reports, const ModesSvg
                      options.standalone ? R"( xmlns="http://www.w3.org/2000/svg")" : "");
   out += "\n<title>vibtherm modes: activation of vibrations and effective degrees of freedom</title>\n";
   out += R"(<defs><linearGradient id=")";
-  out += xml_escape(options.id_prefix);
+  out += escape_markup(options.id_prefix);
   out += R"(activation-ramp" x1="0" y1="1" x2="0" y2="0">)";
   for (const auto& stop : ramp)
     out += fmt::format(R"(<stop offset="{:g}" stop-color="{}"/>)", stop.first, ramp_colour(stop.first));

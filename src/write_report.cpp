@@ -8,37 +8,11 @@
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/error.hpp"
+#include "vibtherm/markup.hpp"
 #include "vibtherm/write_modes.hpp"
 #include "vibtherm/write_nasa7.hpp"
 
 namespace vibtherm {
-
-std::string html_escape(std::string_view text) {
-  std::string out;
-  out.reserve(text.size());
-  for (char c : text) {
-    switch (c) {
-      case '&':
-        out += "&amp;";
-        break;
-      case '<':
-        out += "&lt;";
-        break;
-      case '>':
-        out += "&gt;";
-        break;
-      case '"':
-        out += "&quot;";
-        break;
-      case '\'':
-        out += "&#39;";
-        break;
-      default:
-        out += c;
-    }
-  }
-  return out;
-}
 
 namespace {
 
@@ -101,7 +75,7 @@ std::string Cp_curve_svg(const ReportSpecies& s, TemperatureAxis axis) {
                   "\n<title>Cp(T) of {2}: engine, fitted NASA-7 polynomial and classical limit</title>\n"
                   R"(<rect width="100%" height="100%" fill="white"/>)"
                   "\n",
-                  width, height, html_escape(s.facts.name));
+                  width, height, escape_markup(s.facts.name));
   if (curve.size() < 2) return out + "</svg>";
   const bool log = axis == TemperatureAxis::log;
   const double T_low = curve.front().T_K, T_high = curve.back().T_K;
@@ -180,7 +154,7 @@ std::string Cp_curve_svg(const ReportSpecies& s, TemperatureAxis axis) {
         R"(<line x1="{:.1f}" y1="{:.1f}" x2="{:.1f}" y2="{:.1f}" stroke="{}" stroke-width="2"{}/>)"
         R"(<text x="{:.1f}" y="{:.1f}">{}</text>)",
         lx, ly, lx + 28, ly, entries[i].colour, entries[i].dash, lx + 34, ly + 4,
-        html_escape(entries[i].label));
+        escape_markup(entries[i].label));
   }
   if (!s.fit)
     out += fmt::format(R"(<text x="{:.1f}" y="{:.1f}">no NASA fit (see below)</text>)", lx,
@@ -210,7 +184,7 @@ svg { display: block; max-width: 100%; height: auto; margin: 0.5em 0; }
 )";
 
 void fact(std::string& out, std::string_view term, std::string_view value) {
-  out += fmt::format("<dt>{}</dt><dd>{}</dd>\n", html_escape(term), html_escape(value));
+  out += fmt::format("<dt>{}</dt><dd>{}</dd>\n", escape_markup(term), escape_markup(value));
 }
 
 int warning_count(const ReportSpecies& s) {
@@ -241,7 +215,7 @@ void summary_table(std::string& out, const std::vector<ReportSpecies>& species) 
         "<tr><td><a href=\"#species-{}\">{}</a></td><td>{}</td><td>{}</td><td class=\"num\">{}</td>"
         "<td class=\"num\">{}</td><td class=\"num\">{:.2f}</td><td class=\"num\">{:.2f}</td>"
         "<td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td></tr>\n",
-        i + 1, html_escape(f.name), html_escape(f.formula.empty() ? "—" : f.formula),
+        i + 1, escape_markup(f.name), escape_markup(f.formula.empty() ? "—" : f.formula),
         rotor_type_name(f.rotor), f.symmetry_number, kJ(f.zero_point_energy_J_per_mol),
         s.at_298.S_J_per_mol_K, s.at_298.Cp_J_per_mol_K,
         has_hf ? kJ(s.fit->enthalpy_of_formation_J_per_mol) : "not given", fit, warning_count(s));
@@ -279,7 +253,7 @@ void list_items(std::string& out, const char* css_class, const char* title,
                 const std::vector<std::string>& items) {
   if (items.empty()) return;
   out += fmt::format("<div class=\"{}\"><p><strong>{}</strong></p><ul>\n", css_class, title);
-  for (const auto& item : items) out += fmt::format("<li>{}</li>\n", html_escape(item));
+  for (const auto& item : items) out += fmt::format("<li>{}</li>\n", escape_markup(item));
   out += "</ul></div>\n";
 }
 
@@ -300,7 +274,7 @@ void thermo_table(std::string& out, const std::vector<ThermoPoint>& rows) {
 void nasa_part(std::string& out, const ReportSpecies& s) {
   out += "<h3>NASA-7 polynomial</h3>\n";
   if (!s.fit) {
-    out += fmt::format("<p class=\"not-fitted\">Not fitted: {}.</p>\n", html_escape(s.not_fitted_reason));
+    out += fmt::format("<p class=\"not-fitted\">Not fitted: {}.</p>\n", escape_markup(s.not_fitted_reason));
     return;
   }
   const SpeciesFit& f = *s.fit;
@@ -318,11 +292,11 @@ void nasa_part(std::string& out, const ReportSpecies& s) {
   list_items(out, "notes", "Fit notes", f.notes);
   try {
     out += fmt::format("<pre class=\"nasa7\">{}</pre>\n",
-                       html_escape(write_nasa7_record(std::get<Nasa7>(f.polynomial))));
+                       escape_markup(write_nasa7_record(std::get<Nasa7>(f.polynomial))));
   } catch (const InputError& e) {
     // The fit is sound but the fixed-column format cannot hold it (e.g. a long name).
     out += fmt::format("<p class=\"not-fitted\">The NASA-7 record cannot be written: {}</p>\n",
-                       html_escape(e.what()));
+                       escape_markup(e.what()));
   }
 }
 
@@ -336,9 +310,9 @@ std::string write_report_html(const std::vector<ReportSpecies>& species, const R
   out += style;
   out += "</style>\n</head>\n<body>\n";
   out += fmt::format("<h1>Thermochemistry report</h1>\n<p class=\"generator\">vibtherm {}, {} species.</p>\n",
-                     html_escape(header.version), species.size());
+                     escape_markup(header.version), species.size());
   out += "<ul class=\"model\">\n";
-  for (const auto& line : header.model_summary) out += fmt::format("<li>{}</li>\n", html_escape(line));
+  for (const auto& line : header.model_summary) out += fmt::format("<li>{}</li>\n", escape_markup(line));
   out += "</ul>\n";
   out +=
       "<div class=\"caution\"><p><strong>Caution.</strong> Every value here is computed from a model "
@@ -350,7 +324,7 @@ std::string write_report_html(const std::vector<ReportSpecies>& species, const R
   for (size_t i = 0; i < species.size(); ++i) {
     const ReportSpecies& s = species[i];
     out += fmt::format("<section class=\"species\" id=\"species-{}\">\n<h2>{}</h2>\n", i + 1,
-                       html_escape(s.facts.name));
+                       escape_markup(s.facts.name));
     facts_list(out, s.facts);
     list_items(out, "warnings", "Warnings", s.facts.warnings);
     list_items(out, "notes", "Model notes", s.facts.notes);

@@ -30,7 +30,4 @@ std::string write_report_html(const std::vector<ReportSpecies>& species, const R
 // NASA polynomial over its range and the classical (equipartition) limit.
 std::string Cp_curve_svg(const ReportSpecies& species, TemperatureAxis axis);
 
-// Text and attribute escaping for HTML and XML: & < > " and '.
-std::string html_escape(std::string_view text);
-
 }  // namespace vibtherm
