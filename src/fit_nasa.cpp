@@ -439,6 +439,12 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& option
              grid.end());
 
   const ThermoPoint ref = evaluate(prepared, constants::reference_temperature_K);
+  // A hindered rotor's Cv/R passes its free-rotor limit ½ near the barrier-crossing
+  // temperature (Pitzer & Gwinn 1942, from memory); that excess joins the allowance.
+  const double rotor_limit = 0.5 * static_cast<double>(prepared.hindered_rotors.size());
+  const auto rotor_excess = [rotor_limit](const ThermoPoint& p) {
+    return std::max(0.0, p.internal_rotation.Cp_over_R - rotor_limit);
+  };
   out.S298_J_per_mol_K = ref.S_J_per_mol_K;
   out.H298_minus_H0_J_per_mol = ref.H_minus_H0_J_per_mol;
 
@@ -449,7 +455,8 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& option
   for (const ThermoPoint& p : tabulate(prepared, grid)) {
     in.samples.push_back(FitSample{p.T_K, p.Cp_J_per_mol_K / R,
                                    (out.enthalpy_of_formation_J_per_mol + p.H_minus_H298_J_per_mol) / R,
-                                   p.S_J_per_mol_K / R, p.electronic.Cp_over_R});
+                                   p.S_J_per_mol_K / R,
+                                   p.electronic.Cp_over_R + rotor_excess(p)});
   }
   // Equipartition bounds (common practice): Cp = Cv + R for an ideal gas; the lower
   // bound is translation (3/2) + rotation (0, 1, 3/2) + 1.

@@ -76,7 +76,9 @@ DegreesOfFreedom classical_limits(const PreparedSpecies& prepared, RotorType rot
     c.rotation = rotor == RotorType::linear ? 2.0 : rotor == RotorType::nonlinear ? 3.0 : 0.0;
   }
   c.vibration = 2.0 * static_cast<double>(prepared.vibrations_cm1.size());
-  c.total = c.translation + c.rotation + c.vibration;
+  // A hindered rotor tends to a free rotor at high T: one quadratic (kinetic) term.
+  c.hindered_rotors = static_cast<double>(prepared.hindered_rotors.size());
+  c.total = c.translation + c.rotation + c.vibration + c.hindered_rotors;
   return c;
 }
 
@@ -120,8 +122,10 @@ ModesReport analyse_modes(const PreparedSpecies& prepared, const std::vector<dou
     point.dof.translation = 2.0 * terms.translation.Cv_over_R;
     point.dof.rotation = 2.0 * terms.rotation.Cv_over_R;
     point.dof.vibration = 2.0 * terms.vibration.Cv_over_R;
+    point.dof.hindered_rotors = 2.0 * terms.internal_rotation.Cv_over_R;
     point.dof.electronic = 2.0 * terms.electronic.Cv_over_R;
-    point.dof.total = point.dof.translation + point.dof.rotation + point.dof.vibration;
+    point.dof.total =
+        point.dof.translation + point.dof.rotation + point.dof.vibration + point.dof.hindered_rotors;
     point.modes.reserve(report.modes.size());
     for (const ModeConstants& m : report.modes) {
       // The engine's own oscillator, so the modes add up to its vibrational term.

@@ -2,6 +2,7 @@
 // checks (mode counts, rotor type) belong to the engine.
 #include "vibtherm/read_species.hpp"
 
+#include <fmt/format.h>
 #include <yaml-cpp/eventhandler.h>
 #include <yaml-cpp/yaml.h>
 
@@ -15,6 +16,7 @@
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/elements.hpp"
+#include "vibtherm/hindered_rotor.hpp"
 #include "vibtherm/spelling.hpp"
 #include "vibtherm/units.hpp"
 
@@ -207,8 +209,6 @@ const std::vector<std::string> yaml_keys = {"name",
                                             "hindered_rotors",
                                             "hessian",
                                             "hessian_unit"};
-// Part of the format (design.md section 4) but not computed by this version.
-const std::set<std::string> unsupported_keys = {"hindered_rotors"};
 
 // A full Hessian may differ from its transpose by this much, relative to its largest
 // element, and is then symmetrised: finite-difference Hessians and values printed to five
@@ -296,6 +296,8 @@ class YamlReader {
   std::map<std::string, int> formula(const YAML::Node& node) const;
   std::vector<double> hessian(const YAML::Node& node, const YAML::Node* unit_node,
                               std::size_t atom_count) const;
+  std::vector<HinderedRotor> hindered_rotors(const YAML::Node& node, const Species& species) const;
+  int atom_index(const YAML::Node& node, const std::string& what, std::size_t atom_count) const;
 
   std::string file_;
 };
@@ -674,11 +676,6 @@ Species YamlReader::read(const std::string& text) {
           "top level is " + describe(root) + ", expected a map of species keys such as 'name' and 'atoms'");
 
   Entries e = entries(root, "the species", yaml_keys);
-  for (const auto& [key, entry] : e)
-    if (unsupported_keys.count(key))
-      error(entry.key, "key " + quote(key) +
-                           " is recognised but not supported by this version of vibtherm, " +
-                           "expected 'frequencies' (and rigid rotors only)");
 
   Species species;
   species.origin = {file_, 0, 0};
@@ -807,7 +804,94 @@ Species YamlReader::read(const std::string& text) {
   }
   if (const YAML::Node* t = find(e, "transition_state"))
     species.transition_state = boolean(*t, "'transition_state'");
+  if (const YAML::Node* h = find(e, "hindered_rotors")) {
+    if (species.atoms.empty())
+      error(e["hindered_rotors"].key,
+            "'hindered_rotors' needs 'atoms', expected Cartesian coordinates to find the rotor axis and tops");
+    species.hindered_rotors = hindered_rotors(*h, species);
+  }
   return species;
+}
+
+int YamlReader::atom_index(const YAML::Node& node, const std::string& what, std::size_t atom_count) const {
+  const int index = positive_integer(node, what);
+  if (static_cast<std::size_t>(index) > atom_count)
+    error(node, what + " is atom " + std::to_string(index) + ", expected an atom number from 1 to " +
+                    std::to_string(atom_count));
+  return index - 1;
+}
+
+std::vector<HinderedRotor> YamlReader::hindered_rotors(const YAML::Node& node, const Species& species) const {
+  if (!node.IsSequence() || node.size() == 0)
+    error(node, "'hindered_rotors' is " + describe(node) +
+                    ", expected a list of {bond: [i, j], symmetry, barrier or scan, replaces}");
+  std::vector<HinderedRotor> out;
+  for (const YAML::Node& item : node) {
+    const std::string which = "hindered rotor " + std::to_string(out.size() + 1);
+    if (!item.IsMap())
+      error(item, which + " is " + describe(item) + ", expected {bond: [i, j], symmetry, barrier or scan, replaces}");
+    Entries e = entries(item, which, {"bond", "symmetry", "barrier", "scan", "replaces", "top"});
+    HinderedRotor r;
+    r.where = at(item);
+    const YAML::Node* bond = find(e, "bond");
+    if (!bond) error(item, which + " has no 'bond', expected the two 1-based atoms of the rotation axis");
+    if (!bond->IsSequence() || bond->size() != 2)
+      error(*bond, which + " 'bond' is " + describe(*bond) + ", expected two atom numbers [i, j]");
+    const std::size_t n = species.atoms.size();
+    r.bond_atoms = {atom_index((*bond)[0], which + " bond", n), atom_index((*bond)[1], which + " bond", n)};
+    if (r.bond_atoms[0] == r.bond_atoms[1])
+      error(*bond, which + " 'bond' names atom " + std::to_string(r.bond_atoms[0] + 1) +
+                       " twice, expected two different atoms");
+    const YAML::Node* symmetry = find(e, "symmetry");
+    if (!symmetry) error(item, which + " has no 'symmetry', expected the internal symmetry number (1, 2, 3, ...)");
+    r.symmetry = positive_integer(*symmetry, which + " 'symmetry'");
+    const YAML::Node* barrier = find(e, "barrier");
+    const YAML::Node* scan = find(e, "scan");
+    if (barrier && scan)
+      error(e["scan"].key, which + " has both 'barrier' and 'scan', expected one of them");
+    if (!barrier && !scan)
+      error(item, which + " has neither 'barrier' nor 'scan', expected a barrier in kJ/mol or a scan");
+    if (barrier) {
+      const double V = number(*barrier, which + " 'barrier'");
+      if (V < 0.0)
+        error(*barrier, which + " 'barrier' is " + quote(barrier->Scalar()) +
+                            ", expected a barrier height >= 0 in kJ/mol");
+      r.barrier_J_per_mol = V * 1e3;
+    } else {
+      if (!scan->IsSequence())
+        error(*scan, which + " 'scan' is " + describe(*scan) + ", expected a list of [degrees, kJ/mol]");
+      for (const YAML::Node& point : *scan) {
+        if (!point.IsSequence() || point.size() != 2)
+          error(point, which + " scan point is " + describe(point) + ", expected [degrees, kJ/mol]");
+        r.scan.push_back({number(point[0], which + " scan angle"), number(point[1], which + " scan energy") * 1e3});
+      }
+    }
+    if (const YAML::Node* top = find(e, "top")) {
+      if (!top->IsSequence() || top->size() == 0)
+        error(*top, which + " 'top' is " + describe(*top) + ", expected a list of the atoms on the side of bond atom " +
+                        std::to_string(r.bond_atoms[0] + 1));
+      for (const YAML::Node& a : *top) r.top_atoms.push_back(atom_index(a, which + " 'top'", n));
+      const auto has = [&r](int i) { return std::find(r.top_atoms.begin(), r.top_atoms.end(), i) != r.top_atoms.end(); };
+      if (!has(r.bond_atoms[0]) || has(r.bond_atoms[1]))
+        error(*top, which + " 'top' must hold bond atom " + std::to_string(r.bond_atoms[0] + 1) + " and not atom " +
+                        std::to_string(r.bond_atoms[1] + 1) + ", expected the atoms on the side of the first bond atom");
+    }
+    const YAML::Node* replaces = find(e, "replaces");
+    if (!replaces)
+      error(item, which + " has no 'replaces', expected the wavenumber of the torsional mode it replaces");
+    r.replaces_cm1 = positive_number(*replaces, which + " 'replaces'");
+    if (!species.frequencies_cm1.empty()) {
+      const auto closest = std::min_element(
+          species.frequencies_cm1.begin(), species.frequencies_cm1.end(),
+          [&r](double a, double b) { return std::abs(a - r.replaces_cm1) < std::abs(b - r.replaces_cm1); });
+      if (std::abs(*closest - r.replaces_cm1) > replaces_tolerance_cm1)
+        error(*replaces, fmt::format("{} 'replaces' {:g} cm^-1 matches no frequency within {:g} cm^-1, expected a "
+                                     "given frequency (closest: {:g})",
+                                     which, r.replaces_cm1, replaces_tolerance_cm1, *closest));
+    }
+    out.push_back(std::move(r));
+  }
+  return out;
 }
 
 // ---------------------------------------------------------------------------------------

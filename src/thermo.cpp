@@ -119,6 +119,42 @@ void frequencies_from_hessian(PreparedSpecies& p) {
                   p.species.frequencies_cm1.size(), external_motion_count(external)));
 }
 
+// Takes each hindered rotor's torsional mode out of the vibrations and builds the rotor.
+// The match is against the unscaled input wavenumbers (the file's `replaces` is copied
+// from them) within replaces_tolerance_cm1; two rotors cannot replace one mode.
+void replace_torsions(PreparedSpecies& p) {
+  const Species& s = p.species;
+  if (s.hindered_rotors.empty()) return;
+  if (!p.is_gas || s.atoms.empty())
+    fail(s.origin, fmt::format("species '{}' has hindered rotors, expected a gas-phase species given by 'atoms'",
+                               s.name));
+  std::vector<char> taken(p.vibrations_cm1.size(), 0);
+  for (const HinderedRotor& r : s.hindered_rotors) {
+    const double target = r.replaces_cm1 * p.options.frequency_scale;
+    std::size_t best = p.vibrations_cm1.size();
+    for (std::size_t i = 0; i < p.vibrations_cm1.size(); ++i)
+      if (!taken[i] && (best == p.vibrations_cm1.size() ||
+                        std::abs(p.vibrations_cm1[i] - target) < std::abs(p.vibrations_cm1[best] - target)))
+        best = i;
+    const double tolerance = replaces_tolerance_cm1 * p.options.frequency_scale;
+    if (best == p.vibrations_cm1.size() || std::abs(p.vibrations_cm1[best] - target) > tolerance)
+      fail(r.where, fmt::format("hindered rotor 'replaces' {:g} cm^-1 matches no remaining vibration within {:g} "
+                                "cm^-1, expected one of the frequencies",
+                                r.replaces_cm1, replaces_tolerance_cm1));
+    taken[best] = 1;
+    p.hindered_rotors.push_back(build_hindered_rotor(s, r));
+    p.notes.push_back(fmt::format(
+        "hindered rotor about atoms {}-{} (symmetry {}, reduced moment {:.3f} amu A^2) replaces the mode at {:.1f} "
+        "cm^-1",
+        r.bond_atoms[0] + 1, r.bond_atoms[1] + 1, r.symmetry, p.hindered_rotors.back().reduced_moment_amu_A2,
+        p.vibrations_cm1[best]));
+  }
+  std::vector<double> kept;
+  for (std::size_t i = 0; i < p.vibrations_cm1.size(); ++i)
+    if (!taken[i]) kept.push_back(p.vibrations_cm1[i]);
+  p.vibrations_cm1 = std::move(kept);
+}
+
 // Thermal functions at T without the H(298.15) reference.
 ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
   ThermoPoint point;
@@ -131,8 +167,11 @@ ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
   }
   for (double v : p.vibrations_cm1) point.vibration += harmonic_oscillator_terms(v, T_K);
   point.electronic = electronic_terms(p.species.electronic_levels, T_K);
+  for (const HinderedRotorModel& r : p.hindered_rotors)
+    point.internal_rotation += hindered_rotor_terms(r.levels, r.input.symmetry, T_K);
 
   MotionTerms total = point.translation;
+  total += point.internal_rotation;
   total += point.rotation;
   total += point.vibration;
   total += point.electronic;
@@ -178,9 +217,13 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
   }
   apply_imaginary_policy(p, scaled);
 
+  replace_torsions(p);
+
   double sum_cm1 = 0.0;
   for (double v : p.vibrations_cm1) sum_cm1 += v;
   p.zero_point_energy_J_per_mol = 0.5 * sum_cm1 * c::wavenumber_J_per_mol;
+  for (const HinderedRotorModel& r : p.hindered_rotors)
+    p.zero_point_energy_J_per_mol += r.levels.zero_point_energy_J_per_mol;
   if (!p.is_gas) p.notes.push_back("adsorbate: all 3N motions treated as harmonic vibrations");
   p.H298_minus_H0_J_per_mol = evaluate_terms(p, c::reference_temperature_K).H_minus_H0_J_per_mol;
   return p;
@@ -210,7 +253,7 @@ double classical_Cv_over_R(const PreparedSpecies& prepared) {
   double rotation = 0.0;
   if (prepared.rotor.type == RotorType::linear) rotation = 1.0;
   if (prepared.rotor.type == RotorType::nonlinear) rotation = 1.5;
-  return 1.5 + rotation + vibrations;
+  return 1.5 + rotation + vibrations + 0.5 * static_cast<double>(prepared.hindered_rotors.size());
 }
 
 }  // namespace vibtherm

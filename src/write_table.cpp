@@ -17,13 +17,14 @@ struct MotionRef {
   const char* name;
   const MotionTerms ThermoPoint::*terms;
 };
-constexpr std::array<MotionRef, 4> motions{{{"translation", &ThermoPoint::translation},
+constexpr std::array<MotionRef, 5> motions{{{"translation", &ThermoPoint::translation},
                                             {"rotation", &ThermoPoint::rotation},
                                             {"vibration", &ThermoPoint::vibration},
+                                            {"internal_rotation", &ThermoPoint::internal_rotation},
                                             {"electronic", &ThermoPoint::electronic}}};
 
 // Short labels for the text breakdown columns.
-constexpr std::array<const char*, 4> motion_tags{"trans", "rot", "vib", "elec"};
+constexpr std::array<const char*, 5> motion_tags{"trans", "rot", "vib", "hrot", "elec"};
 
 }  // namespace
 

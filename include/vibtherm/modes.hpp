@@ -47,11 +47,12 @@ struct ModeConstants {
 };
 
 // Effective quadratic degrees of freedom 2·Cv/R of each motion. `total` is translation +
-// rotation + vibration; the electronic part is not a set of quadratic terms and is apart.
+// rotation + vibration + hindered rotors; the electronic part is not a set of quadratic terms and is apart.
 struct DegreesOfFreedom {
   double translation = 0.0;
   double rotation = 0.0;
   double vibration = 0.0;
+  double hindered_rotors = 0.0;  // classical limit 1 per rotor (free rotor); may exceed it near the barrier
   double total = 0.0;
   double electronic = 0.0;
 };

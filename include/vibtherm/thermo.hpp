@@ -8,6 +8,7 @@
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/geometry.hpp"
+#include "vibtherm/hindered_rotor.hpp"
 #include "vibtherm/partition.hpp"
 #include "vibtherm/species.hpp"
 
@@ -30,9 +31,11 @@ struct PreparedSpecies {
   ModelOptions options;
   RotorAnalysis rotor;
   bool is_gas = true;
-  std::vector<double> vibrations_cm1;        // real wavenumbers used, scaled, input order
+  std::vector<double> vibrations_cm1;        // real wavenumbers used, scaled, input order,
+                                             // without the torsions replaced by hindered rotors
+  std::vector<HinderedRotorModel> hindered_rotors;
   std::vector<double> used_frequencies_cm1;  // as reported: includes a dropped reaction coordinate (negative)
-  double zero_point_energy_J_per_mol = 0.0;
+  double zero_point_energy_J_per_mol = 0.0;  // harmonic ½hcν̃ sum plus the rotors' own ZPE
   double H298_minus_H0_J_per_mol = 0.0;  // thermal enthalpy at 298.15 K, the table's reference
   std::vector<std::string> warnings;     // things the user must see
   std::vector<std::string> notes;        // model choices worth stating
@@ -45,6 +48,7 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
 struct ThermoPoint {
   double T_K = 0.0;
   MotionTerms translation, rotation, vibration, electronic;  // dimensionless, per motion
+  MotionTerms internal_rotation;                             // all hindered rotors together
   double Cv_J_per_mol_K = 0.0;
   double Cp_J_per_mol_K = 0.0;
   double S_J_per_mol_K = 0.0;
@@ -58,7 +62,7 @@ ThermoPoint evaluate(const PreparedSpecies& prepared, double T_K);
 std::vector<ThermoPoint> tabulate(const PreparedSpecies& prepared, const std::vector<double>& temperatures_K);
 
 // Classical (equipartition) limit of Cv/R: translation 3/2, rotation 1 or 3/2, one per
-// vibration; for an adsorbate 3N.
+// vibration, ½ per hindered rotor (its free-rotor limit); for an adsorbate 3N.
 double classical_Cv_over_R(const PreparedSpecies& prepared);
 
 }  // namespace vibtherm

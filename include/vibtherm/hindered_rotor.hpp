@@ -1,0 +1,75 @@
+// One-dimensional hindered internal rotors (torsions): reduced moment of inertia about a
+// bond, the quantum levels of the periodic torsional potential, and their thermal terms.
+#pragma once
+
+#include <vector>
+
+#include "vibtherm/partition.hpp"
+#include "vibtherm/species.hpp"
+
+namespace vibtherm {
+
+// A `replaces` wavenumber matches a given frequency when they differ by at most this much:
+// both are normally copied from one frequency job, so only print rounding separates them.
+inline constexpr double replaces_tolerance_cm1 = 1.0;
+
+// V(φ) = c0 + Σ_k [cos_k cos(kφ) + sin_k sin(kφ)], k = 1..K, in J/mol; index 0 of
+// `sin_J_per_mol` is unused (kept 0) so both vectors are indexed by k.
+struct TorsionPotential {
+  std::vector<double> cos_J_per_mol{0.0};
+  std::vector<double> sin_J_per_mol{0.0};
+  double value_J_per_mol(double phi_rad) const;
+  double minimum_J_per_mol() const;  // on a 1/20 degree grid
+};
+
+// V(φ) = V/2 (1 − cos(σφ)) (design.md section 4).
+TorsionPotential cosine_barrier(double barrier_J_per_mol, int symmetry);
+
+// Least-squares fit of a scan (degrees, J/mol) to the series in cos/sin(kσφ), k = 1..K,
+// K = min(6, (distinct angles modulo 360/σ − 1) / 2). Throws InputError (at `where`)
+// unless the angles cover a whole period 360/σ with no gap wider than a quarter of it.
+TorsionPotential fit_scan(const std::vector<ScanPoint>& scan, int symmetry, const SourceLocation& where);
+
+// The atoms (0-based) on the side of `atom_a` when the bond a–b is cut; bonded means
+// closer than 1.25 × the sum of covalent radii. Throws InputError when a and b stay
+// connected (a ring) or an element has no tabulated radius.
+std::vector<int> top_by_connectivity(const std::vector<Atom>& atoms, int atom_a, int atom_b,
+                                     const SourceLocation& where);
+
+// Reduced moment of the internal rotation about the a–b axis, the I(2,1) approximation
+// (East & Radom, J. Chem. Phys. 106, 6655 (1997), from memory): each top's moment about
+// the bond axis, I_red = I_A I_B / (I_A + I_B). `top_a` lists the atoms (0-based) of the
+// side of atom a; the other atoms form the second top.
+double reduced_moment_amu_A2(const std::vector<Atom>& atoms, int atom_a, int atom_b, const std::vector<int>& top_a);
+
+// Eigenvalues of H = −B d²/dφ² + V(φ), B = ħ²/(2 I_red), in the free-rotor basis e^{imφ},
+// |m| ≤ M, sorted, in J/mol (absolute, on the scale of V).
+struct TorsionLevels {
+  std::vector<double> energies_J_per_mol;  // above the ground level
+  double zero_point_energy_J_per_mol = 0.0;  // ground level − V_min
+  int basis_max_m = 0;
+};
+
+// M is chosen so that B M² ≥ (V_max − V_min) + 1e5 cm^-1 (levels up to e^{-29} of their
+// weight at 5000 K are then converged), but 20 ≤ M ≤ 800 (cost: the Hamiltonian splits
+// into blocks of m modulo the potential's period and is diagonalised per block).
+TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential);
+TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential, int basis_max_m);
+
+// Thermal terms from the level sum counted from the ground level, every level of the full
+// 2π ring summed and then divided by the internal symmetry number: ln q − ln σ_int
+// (Pitzer & Gwinn, J. Chem. Phys. 10, 428 (1942), from memory, for the role of σ_int).
+MotionTerms hindered_rotor_terms(const TorsionLevels& levels, int symmetry, double T_K);
+
+// A rotor of a species, ready for the engine.
+struct HinderedRotorModel {
+  HinderedRotor input;
+  std::vector<int> top_atoms;  // 0-based, the side of bond atom 1
+  double reduced_moment_amu_A2 = 0.0;
+  TorsionPotential potential;
+  TorsionLevels levels;
+};
+
+HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRotor& rotor);
+
+}  // namespace vibtherm
