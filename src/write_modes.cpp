@@ -55,6 +55,7 @@ std::string classical_breakdown(const ModesReport& r) {
   if (r.classical.translation > 0) parts.push_back("translation " + whole(r.classical.translation));
   if (r.classical.rotation > 0) parts.push_back("rotation " + whole(r.classical.rotation));
   if (r.classical.vibration > 0) parts.push_back("vibration " + whole(r.classical.vibration));
+  if (r.classical.hindered_rotors > 0) parts.push_back("hindered rotors " + whole(r.classical.hindered_rotors));
   return fmt::format("{}{}", fmt::join(parts, " + "), r.is_gas ? "" : ", all 3N motions vibrate");
 }
 
@@ -105,6 +106,9 @@ std::string modes_to_text(const std::vector<ModesReport>& reports) {
       if (r.classical.rotation > 0) parts.push_back(fmt::format("rotation {:.2f}", p.dof.rotation));
       if (r.classical.vibration > 0)
         parts.push_back(fmt::format("vibration {:.2f} of {}", p.dof.vibration, whole(r.classical.vibration)));
+      if (r.classical.hindered_rotors > 0)
+        parts.push_back(fmt::format("hindered rotors {:.2f} of {}", p.dof.hindered_rotors,
+                                    whole(r.classical.hindered_rotors)));
       out += fmt::format("  at {:<{}} F = {:5.2f} of {} classical ({})", temperature_label(p.T_K) + ':',
                          label_width, p.dof.total, whole(r.classical.total), fmt::join(parts, ", "));
       if (!r.modes.empty())
@@ -142,6 +146,10 @@ std::string modes_to_csv(const std::vector<ModesReport>& reports) {
       }};
       for (const auto& [item, dof, classical] : motions)
         out += fmt::format("{},{},{},,,,{},{},{},\n", name, p.T_K, item, dof / 2.0, dof, classical);
+      // Only species with hindered rotors get their row, so rigid-rotor output is unchanged.
+      if (r.classical.hindered_rotors > 0)
+        out += fmt::format("{},{},hindered_rotors,,,,{},{},{},\n", name, p.T_K, p.dof.hindered_rotors / 2.0,
+                           p.dof.hindered_rotors, r.classical.hindered_rotors);
       // The electronic part has no classical limit: that field stays empty.
       out +=
           fmt::format("{},{},electronic,,,,{},{},,\n", name, p.T_K, p.dof.electronic / 2.0, p.dof.electronic);
@@ -177,6 +185,7 @@ std::string modes_to_json(const std::vector<ModesReport>& reports) {
                           {"rotation", r.classical.rotation},
                           {"vibration", r.classical.vibration},
                           {"total", r.classical.total}};
+    if (r.classical.hindered_rotors > 0) s["classical_dof"]["hindered_rotors"] = r.classical.hindered_rotors;
     ordered_json vibrations = ordered_json::array();
     for (const ModeConstants& m : r.modes)
       vibrations.push_back({{"index", m.index},
@@ -197,6 +206,7 @@ std::string modes_to_json(const std::vector<ModesReport>& reports) {
                   {"vibration", p.dof.vibration},
                   {"total", p.dof.total},
                   {"electronic", p.dof.electronic}};
+      if (r.classical.hindered_rotors > 0) t["dof"]["hindered_rotors"] = p.dof.hindered_rotors;
       t["counts"] = {{"frozen", p.count(ModeState::frozen)},
                      {"partial", p.count(ModeState::partial)},
                      {"active", p.count(ModeState::active)}};
@@ -397,6 +407,8 @@ double svg_dof_curve(std::string& out, const ModesReport& r, const std::vector<s
   bool electronic = false;
   for (const ModesPoint& p : r.points) electronic = electronic || p.dof.electronic >= 1e-3;
   double y_max = r.classical.total;
+  // A hindered rotor's 2Cv/R passes its free-rotor value near the barrier crossing.
+  for (const ModesPoint& p : r.points) y_max = std::max(y_max, p.dof.total);
   if (electronic)
     for (const ModesPoint& p : r.points) y_max = std::max(y_max, p.dof.electronic);
   y_max = std::max(1.0, 1.08 * y_max);
