@@ -455,8 +455,7 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& option
   for (const ThermoPoint& p : tabulate(prepared, grid)) {
     in.samples.push_back(FitSample{p.T_K, p.Cp_J_per_mol_K / R,
                                    (out.enthalpy_of_formation_J_per_mol + p.H_minus_H298_J_per_mol) / R,
-                                   p.S_J_per_mol_K / R,
-                                   p.electronic.Cp_over_R + rotor_excess(p)});
+                                   p.S_J_per_mol_K / R, p.electronic.Cp_over_R + rotor_excess(p)});
   }
   // Equipartition bounds (common practice): Cp = Cv + R for an ideal gas; the lower
   // bound is translation (3/2) + rotation (0, 1, 3/2) + 1.
@@ -473,7 +472,7 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& option
   if (options.form == NasaForm::nasa7) {
     Nasa7 n;
     n.name = sp.name;
-    n.note = out.enthalpy_of_formation_missing ? "noHf" : "RRHO";
+    n.note = out.enthalpy_of_formation_missing ? "noHf" : prepared.hindered_rotors.empty() ? "RRHO" : "RRHR";
     n.composition = composition;
     n.phase = prepared.is_gas ? 'G' : 'S';
     n.T_low_K = out.fit.breakpoints_K[0];
@@ -496,7 +495,9 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& option
     // in full in the JSON form.
     n.comment = "vibtherm " VIBTHERM_VERSION " RRHO fit";
     if (out.enthalpy_of_formation_missing) n.comment += "; H298=0: enthalpy of formation missing";
-    n.date_code = out.enthalpy_of_formation_missing ? "noHf" : "RRHO";
+    n.date_code = out.enthalpy_of_formation_missing  ? "noHf"
+                  : prepared.hindered_rotors.empty() ? "RRHO"
+                                                     : "RRHR";
     n.composition = composition;
     n.phase = prepared.is_gas ? 0 : 1;
     n.molar_mass_g_per_mol = out.molar_mass_g_per_mol;

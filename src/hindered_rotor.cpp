@@ -57,9 +57,10 @@ TorsionPotential fit_scan(const std::vector<ScanPoint>& scan, int symmetry, cons
   double widest = distinct.empty() ? period_deg : distinct.front() + period_deg - distinct.back();
   for (std::size_t i = 1; i < distinct.size(); ++i) widest = std::max(widest, distinct[i] - distinct[i - 1]);
   if (distinct.size() < 3 || widest > period_deg / 4.0 + 1e-9)
-    fail(where, fmt::format("'scan' has {} distinct angles modulo {:g} deg with a gap of {:g} deg, expected "
-                            "points over a whole period 0-{:g} deg (360/symmetry) with no gap wider than {:g} deg",
-                            distinct.size(), period_deg, widest, period_deg, period_deg / 4.0));
+    fail(where,
+         fmt::format("'scan' has {} distinct angles modulo {:g} deg with a gap of {:g} deg, expected "
+                     "points over a whole period 0-{:g} deg (360/symmetry) with no gap wider than {:g} deg",
+                     distinct.size(), period_deg, widest, period_deg, period_deg / 4.0));
   const int order = std::min(6, static_cast<int>(distinct.size() - 1) / 2);
   const Eigen::Index rows = static_cast<Eigen::Index>(scan.size());
   Eigen::MatrixXd A(rows, 1 + 2 * order);
@@ -143,9 +144,11 @@ std::vector<int> top_by_connectivity(const std::vector<Atom>& atoms, int atom_a,
   return top;
 }
 
-double reduced_moment_amu_A2(const std::vector<Atom>& atoms, int atom_a, int atom_b, const std::vector<int>& top_a) {
+double reduced_moment_amu_A2(const std::vector<Atom>& atoms, int atom_a, int atom_b,
+                             const std::vector<int>& top_a) {
   const Eigen::Vector3d origin = atoms[static_cast<std::size_t>(atom_a)].position_angstrom;
-  const Eigen::Vector3d axis = (atoms[static_cast<std::size_t>(atom_b)].position_angstrom - origin).normalized();
+  const Eigen::Vector3d axis =
+      (atoms[static_cast<std::size_t>(atom_b)].position_angstrom - origin).normalized();
   double I_A = 0.0, I_B = 0.0;
   for (std::size_t i = 0; i < atoms.size(); ++i) {
     const Eigen::Vector3d r = atoms[i].position_angstrom - origin;
@@ -179,7 +182,8 @@ TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotentia
   return torsion_levels(reduced_moment_amu_A2, potential, M);
 }
 
-TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential, int basis_max_m) {
+TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential,
+                             int basis_max_m) {
   const double I_kg_m2 = reduced_moment_amu_A2 * c::atomic_mass_constant_kg * c::angstrom_m * c::angstrom_m;
   const double hbar = c::planck_J_s / (2.0 * c::pi);
   const double B_J_per_mol = hbar * hbar / (2.0 * I_kg_m2) * c::avogadro_per_mol;
@@ -203,7 +207,8 @@ TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotentia
         const auto uk = static_cast<std::size_t>(std::abs(k));
         // cos kφ = (e^{ikφ} + e^{−ikφ})/2, sin kφ = (e^{ikφ} − e^{−ikφ})/(2i).
         const double sign = k > 0 ? 1.0 : -1.0;
-        H(i, j) = std::complex<double>(0.5 * potential.cos_J_per_mol[uk], -0.5 * sign * potential.sin_J_per_mol[uk]);
+        H(i, j) = std::complex<double>(0.5 * potential.cos_J_per_mol[uk],
+                                       -0.5 * sign * potential.sin_J_per_mol[uk]);
       }
     }
     Eigen::SelfAdjointEigenSolver<Eigen::MatrixXcd> solver(H, Eigen::EigenvaluesOnly);
@@ -243,12 +248,14 @@ HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRo
   HinderedRotorModel m;
   m.input = rotor;
   const int a = rotor.bond_atoms[0], b = rotor.bond_atoms[1];
-  m.top_atoms = rotor.top_atoms.empty() ? top_by_connectivity(species.atoms, a, b, rotor.where) : rotor.top_atoms;
+  m.top_atoms =
+      rotor.top_atoms.empty() ? top_by_connectivity(species.atoms, a, b, rotor.where) : rotor.top_atoms;
   m.reduced_moment_amu_A2 = reduced_moment_amu_A2(species.atoms, a, b, m.top_atoms);
   if (!(m.reduced_moment_amu_A2 > 0.0))
-    fail(rotor.where, fmt::format("the rotor about atoms {} and {} has a top with no moment about the bond axis, "
-                                  "expected atoms off the axis on both sides",
-                                  a + 1, b + 1));
+    fail(rotor.where,
+         fmt::format("the rotor about atoms {} and {} has a top with no moment about the bond axis, "
+                     "expected atoms off the axis on both sides",
+                     a + 1, b + 1));
   m.potential = rotor.barrier_J_per_mol ? cosine_barrier(*rotor.barrier_J_per_mol, rotor.symmetry)
                                         : fit_scan(rotor.scan, rotor.symmetry, rotor.where);
   m.levels = torsion_levels(m.reduced_moment_amu_A2, m.potential);

@@ -806,8 +806,9 @@ Species YamlReader::read(const std::string& text) {
     species.transition_state = boolean(*t, "'transition_state'");
   if (const YAML::Node* h = find(e, "hindered_rotors")) {
     if (species.atoms.empty())
-      error(e["hindered_rotors"].key,
-            "'hindered_rotors' needs 'atoms', expected Cartesian coordinates to find the rotor axis and tops");
+      error(
+          e["hindered_rotors"].key,
+          "'hindered_rotors' needs 'atoms', expected Cartesian coordinates to find the rotor axis and tops");
     species.hindered_rotors = hindered_rotors(*h, species);
   }
   return species;
@@ -829,7 +830,8 @@ std::vector<HinderedRotor> YamlReader::hindered_rotors(const YAML::Node& node, c
   for (const YAML::Node& item : node) {
     const std::string which = "hindered rotor " + std::to_string(out.size() + 1);
     if (!item.IsMap())
-      error(item, which + " is " + describe(item) + ", expected {bond: [i, j], symmetry, barrier or scan, replaces}");
+      error(item, which + " is " + describe(item) +
+                      ", expected {bond: [i, j], symmetry, barrier or scan, replaces}");
     Entries e = entries(item, which, {"bond", "symmetry", "barrier", "scan", "replaces", "top"});
     HinderedRotor r;
     r.where = at(item);
@@ -843,12 +845,12 @@ std::vector<HinderedRotor> YamlReader::hindered_rotors(const YAML::Node& node, c
       error(*bond, which + " 'bond' names atom " + std::to_string(r.bond_atoms[0] + 1) +
                        " twice, expected two different atoms");
     const YAML::Node* symmetry = find(e, "symmetry");
-    if (!symmetry) error(item, which + " has no 'symmetry', expected the internal symmetry number (1, 2, 3, ...)");
+    if (!symmetry)
+      error(item, which + " has no 'symmetry', expected the internal symmetry number (1, 2, 3, ...)");
     r.symmetry = positive_integer(*symmetry, which + " 'symmetry'");
     const YAML::Node* barrier = find(e, "barrier");
     const YAML::Node* scan = find(e, "scan");
-    if (barrier && scan)
-      error(e["scan"].key, which + " has both 'barrier' and 'scan', expected one of them");
+    if (barrier && scan) error(e["scan"].key, which + " has both 'barrier' and 'scan', expected one of them");
     if (!barrier && !scan)
       error(item, which + " has neither 'barrier' nor 'scan', expected a barrier in kJ/mol or a scan");
     if (barrier) {
@@ -863,18 +865,23 @@ std::vector<HinderedRotor> YamlReader::hindered_rotors(const YAML::Node& node, c
       for (const YAML::Node& point : *scan) {
         if (!point.IsSequence() || point.size() != 2)
           error(point, which + " scan point is " + describe(point) + ", expected [degrees, kJ/mol]");
-        r.scan.push_back({number(point[0], which + " scan angle"), number(point[1], which + " scan energy") * 1e3});
+        r.scan.push_back(
+            {number(point[0], which + " scan angle"), number(point[1], which + " scan energy") * 1e3});
       }
     }
     if (const YAML::Node* top = find(e, "top")) {
       if (!top->IsSequence() || top->size() == 0)
-        error(*top, which + " 'top' is " + describe(*top) + ", expected a list of the atoms on the side of bond atom " +
+        error(*top, which + " 'top' is " + describe(*top) +
+                        ", expected a list of the atoms on the side of bond atom " +
                         std::to_string(r.bond_atoms[0] + 1));
       for (const YAML::Node& a : *top) r.top_atoms.push_back(atom_index(a, which + " 'top'", n));
-      const auto has = [&r](int i) { return std::find(r.top_atoms.begin(), r.top_atoms.end(), i) != r.top_atoms.end(); };
+      const auto has = [&r](int i) {
+        return std::find(r.top_atoms.begin(), r.top_atoms.end(), i) != r.top_atoms.end();
+      };
       if (!has(r.bond_atoms[0]) || has(r.bond_atoms[1]))
-        error(*top, which + " 'top' must hold bond atom " + std::to_string(r.bond_atoms[0] + 1) + " and not atom " +
-                        std::to_string(r.bond_atoms[1] + 1) + ", expected the atoms on the side of the first bond atom");
+        error(*top, which + " 'top' must hold bond atom " + std::to_string(r.bond_atoms[0] + 1) +
+                        " and not atom " + std::to_string(r.bond_atoms[1] + 1) +
+                        ", expected the atoms on the side of the first bond atom");
     }
     const YAML::Node* replaces = find(e, "replaces");
     if (!replaces)
@@ -885,9 +892,10 @@ std::vector<HinderedRotor> YamlReader::hindered_rotors(const YAML::Node& node, c
           species.frequencies_cm1.begin(), species.frequencies_cm1.end(),
           [&r](double a, double b) { return std::abs(a - r.replaces_cm1) < std::abs(b - r.replaces_cm1); });
       if (std::abs(*closest - r.replaces_cm1) > replaces_tolerance_cm1)
-        error(*replaces, fmt::format("{} 'replaces' {:g} cm^-1 matches no frequency within {:g} cm^-1, expected a "
-                                     "given frequency (closest: {:g})",
-                                     which, r.replaces_cm1, replaces_tolerance_cm1, *closest));
+        error(*replaces,
+              fmt::format("{} 'replaces' {:g} cm^-1 matches no frequency within {:g} cm^-1, expected a "
+                          "given frequency (closest: {:g})",
+                          which, r.replaces_cm1, replaces_tolerance_cm1, *closest));
     }
     out.push_back(std::move(r));
   }

@@ -126,8 +126,9 @@ void replace_torsions(PreparedSpecies& p) {
   const Species& s = p.species;
   if (s.hindered_rotors.empty()) return;
   if (!p.is_gas || s.atoms.empty())
-    fail(s.origin, fmt::format("species '{}' has hindered rotors, expected a gas-phase species given by 'atoms'",
-                               s.name));
+    fail(s.origin,
+         fmt::format("species '{}' has hindered rotors, expected a gas-phase species given by 'atoms'",
+                     s.name));
   std::vector<char> taken(p.vibrations_cm1.size(), 0);
   for (const HinderedRotor& r : s.hindered_rotors) {
     const double target = r.replaces_cm1 * p.options.frequency_scale;
@@ -138,16 +139,18 @@ void replace_torsions(PreparedSpecies& p) {
         best = i;
     const double tolerance = replaces_tolerance_cm1 * p.options.frequency_scale;
     if (best == p.vibrations_cm1.size() || std::abs(p.vibrations_cm1[best] - target) > tolerance)
-      fail(r.where, fmt::format("hindered rotor 'replaces' {:g} cm^-1 matches no remaining vibration within {:g} "
-                                "cm^-1, expected one of the frequencies",
-                                r.replaces_cm1, replaces_tolerance_cm1));
+      fail(r.where,
+           fmt::format("hindered rotor 'replaces' {:g} cm^-1 matches no remaining vibration within {:g} "
+                       "cm^-1, expected one of the frequencies",
+                       r.replaces_cm1, replaces_tolerance_cm1));
     taken[best] = 1;
     p.hindered_rotors.push_back(build_hindered_rotor(s, r));
-    p.notes.push_back(fmt::format(
-        "hindered rotor about atoms {}-{} (symmetry {}, reduced moment {:.3f} amu A^2) replaces the mode at {:.1f} "
-        "cm^-1",
-        r.bond_atoms[0] + 1, r.bond_atoms[1] + 1, r.symmetry, p.hindered_rotors.back().reduced_moment_amu_A2,
-        p.vibrations_cm1[best]));
+    p.notes.push_back(
+        fmt::format("hindered rotor about atoms {}-{} (symmetry {}, reduced moment {:.3f} amu A^2) replaces "
+                    "the mode at {:.1f} "
+                    "cm^-1",
+                    r.bond_atoms[0] + 1, r.bond_atoms[1] + 1, r.symmetry,
+                    p.hindered_rotors.back().reduced_moment_amu_A2, p.vibrations_cm1[best]));
   }
   std::vector<double> kept;
   for (std::size_t i = 0; i < p.vibrations_cm1.size(); ++i)

@@ -55,7 +55,8 @@ std::string classical_breakdown(const ModesReport& r) {
   if (r.classical.translation > 0) parts.push_back("translation " + whole(r.classical.translation));
   if (r.classical.rotation > 0) parts.push_back("rotation " + whole(r.classical.rotation));
   if (r.classical.vibration > 0) parts.push_back("vibration " + whole(r.classical.vibration));
-  if (r.classical.hindered_rotors > 0) parts.push_back("hindered rotors " + whole(r.classical.hindered_rotors));
+  if (r.classical.hindered_rotors > 0)
+    parts.push_back("hindered rotors " + whole(r.classical.hindered_rotors));
   return fmt::format("{}{}", fmt::join(parts, " + "), r.is_gas ? "" : ", all 3N motions vibrate");
 }
 

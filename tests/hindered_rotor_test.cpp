@@ -44,7 +44,8 @@ TEST_CASE("reduced moment of two identical tops is half of one top's moment") {
   // tops give I_A² / (2 I_A) = I_A / 2.
   CHECK(reduced_moment_amu_A2(atoms, 0, 1, top) == doctest::Approx(1.5 * test::mass_H1).epsilon(1e-12));
   // A top given on the other side of the bond yields the same reduced moment.
-  CHECK(reduced_moment_amu_A2(atoms, 1, 0, {1, 3, 5, 7}) == doctest::Approx(1.5 * test::mass_H1).epsilon(1e-12));
+  CHECK(reduced_moment_amu_A2(atoms, 1, 0, {1, 3, 5, 7}) ==
+        doctest::Approx(1.5 * test::mass_H1).epsilon(1e-12));
 }
 
 TEST_CASE("a ring bond cannot be split into two tops") {
@@ -100,7 +101,7 @@ TEST_CASE("high barrier: the torsional oscillator") {
 }
 
 TEST_CASE("low barrier: the free-rotor limit at T >> V/k") {
-  const double I = 1.5;  // amu Å², test parameter
+  const double I = 1.5;                                                    // amu Å², test parameter
   const TorsionLevels levels = torsion_levels(I, cosine_barrier(2e3, 3));  // V/R = 240 K
   // Classical hindered rotor (Pitzer & Gwinn 1942, from memory): Cv/R → ½ as V/kT → 0.
   CHECK(hindered_rotor_terms(levels, 3, 5000.0).Cv_over_R == doctest::Approx(0.5).epsilon(5e-3));
@@ -110,7 +111,8 @@ TEST_CASE("low barrier: the free-rotor limit at T >> V/k") {
 
 TEST_CASE("internal symmetry number divides q") {
   const TorsionLevels levels = torsion_levels(1.5, cosine_barrier(12e3, 3));
-  const MotionTerms one = hindered_rotor_terms(levels, 1, 500.0), three = hindered_rotor_terms(levels, 3, 500.0);
+  const MotionTerms one = hindered_rotor_terms(levels, 1, 500.0),
+                    three = hindered_rotor_terms(levels, 3, 500.0);
   // ln q − ln σ_int (textbook): S drops by R ln 3, energies and Cv unchanged.
   CHECK(one.S_over_R - three.S_over_R == doctest::Approx(std::log(3.0)).epsilon(1e-12));
   CHECK(one.Cv_over_R == doctest::Approx(three.Cv_over_R).epsilon(1e-14));
@@ -150,7 +152,8 @@ TEST_CASE("basis size converges the levels") {
   const TorsionLevels larger = torsion_levels(1.5, v, 2 * automatic.basis_max_m);
   for (std::size_t i = 1; i < 100; ++i)
     CHECK(automatic.energies_J_per_mol[i] == doctest::Approx(larger.energies_J_per_mol[i]).epsilon(1e-10));
-  const MotionTerms a = hindered_rotor_terms(automatic, 3, 3000.0), b = hindered_rotor_terms(larger, 3, 3000.0);
+  const MotionTerms a = hindered_rotor_terms(automatic, 3, 3000.0),
+                    b = hindered_rotor_terms(larger, 3, 3000.0);
   CHECK(a.S_over_R == doctest::Approx(b.S_over_R).epsilon(1e-10));
 }
 
@@ -161,7 +164,7 @@ TEST_CASE("engine: the rotor replaces its torsion") {
   s.formula = {{"C", 2}, {"H", 6}};
   s.symmetry_number = 6;
   // Test wavenumbers (not measured): 18 modes, the torsion at 300.
-  s.frequencies_cm1 = {300, 800, 800, 1000, 1200, 1200, 1400, 1400, 1400,
+  s.frequencies_cm1 = {300,  800,  800,  1000, 1200, 1200, 1400, 1400, 1400,
                        1450, 1450, 1450, 1450, 2900, 2950, 2950, 3000, 3000};
   HinderedRotor r;
   r.bond_atoms = {0, 1};

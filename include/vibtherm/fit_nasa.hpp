@@ -57,7 +57,8 @@ struct FitSample {
   double Cp_over_R = 0.0;
   double H_over_R = 0.0;  // in K
   double S_over_R = 0.0;
-  double electronic_Cp_over_R = 0.0;  // allowance above the classical limit (electronic and hindered-rotor excess)
+  double electronic_Cp_over_R =
+      0.0;  // allowance above the classical limit (electronic and hindered-rotor excess)
 };
 
 // Physical bounds of Cp/R (common practice, from equipartition): lower = translation +

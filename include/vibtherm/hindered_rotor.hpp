@@ -40,12 +40,13 @@ std::vector<int> top_by_connectivity(const std::vector<Atom>& atoms, int atom_a,
 // (East & Radom, J. Chem. Phys. 106, 6655 (1997), from memory): each top's moment about
 // the bond axis, I_red = I_A I_B / (I_A + I_B). `top_a` lists the atoms (0-based) of the
 // side of atom a; the other atoms form the second top.
-double reduced_moment_amu_A2(const std::vector<Atom>& atoms, int atom_a, int atom_b, const std::vector<int>& top_a);
+double reduced_moment_amu_A2(const std::vector<Atom>& atoms, int atom_a, int atom_b,
+                             const std::vector<int>& top_a);
 
 // Eigenvalues of H = −B d²/dφ² + V(φ), B = ħ²/(2 I_red), in the free-rotor basis e^{imφ},
 // |m| ≤ M, sorted, in J/mol (absolute, on the scale of V).
 struct TorsionLevels {
-  std::vector<double> energies_J_per_mol;  // above the ground level
+  std::vector<double> energies_J_per_mol;    // above the ground level
   double zero_point_energy_J_per_mol = 0.0;  // ground level − V_min
   int basis_max_m = 0;
 };
@@ -54,7 +55,8 @@ struct TorsionLevels {
 // weight at 5000 K are then converged), but 20 ≤ M ≤ 800 (cost: the Hamiltonian splits
 // into blocks of m modulo the potential's period and is diagonalised per block).
 TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential);
-TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential, int basis_max_m);
+TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential,
+                             int basis_max_m);
 
 // Thermal terms from the level sum counted from the ground level, every level of the full
 // 2π ring summed and then divided by the internal symmetry number: ln q − ln σ_int

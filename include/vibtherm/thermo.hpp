@@ -31,14 +31,14 @@ struct PreparedSpecies {
   ModelOptions options;
   RotorAnalysis rotor;
   bool is_gas = true;
-  std::vector<double> vibrations_cm1;        // real wavenumbers used, scaled, input order,
-                                             // without the torsions replaced by hindered rotors
+  std::vector<double> vibrations_cm1;  // real wavenumbers used, scaled, input order,
+                                       // without the torsions replaced by hindered rotors
   std::vector<HinderedRotorModel> hindered_rotors;
   std::vector<double> used_frequencies_cm1;  // as reported: includes a dropped reaction coordinate (negative)
   double zero_point_energy_J_per_mol = 0.0;  // harmonic ½hcν̃ sum plus the rotors' own ZPE
-  double H298_minus_H0_J_per_mol = 0.0;  // thermal enthalpy at 298.15 K, the table's reference
-  std::vector<std::string> warnings;     // things the user must see
-  std::vector<std::string> notes;        // model choices worth stating
+  double H298_minus_H0_J_per_mol = 0.0;      // thermal enthalpy at 298.15 K, the table's reference
+  std::vector<std::string> warnings;         // things the user must see
+  std::vector<std::string> notes;            // model choices worth stating
 };
 
 // Validates and prepares. Throws InputError (located at the species file) for imaginary

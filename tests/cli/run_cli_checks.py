@@ -116,6 +116,37 @@ with tempfile.TemporaryDirectory() as tmp:
     check("hessian: D2O frequencies between 1/sqrt(2) and 1 of H2O's",
           len(ratios) == 3 and all(0.5 ** 0.5 < q < 1.0 for q in ratios), f"{ratios} {d2o}")
 
+# Hindered rotor end to end: the table shows the internal rotation, the modes analysis
+# counts it in F(T), and F + electronic equals the table's 2 Cv/R.
+ethane = os.path.join(root, "tests", "data", "ethane_rotor.yaml")
+r = run("table", ethane, "--temps", "150,298.15,1000", "--format", "json", "--breakdown")
+rows = json.loads(r.stdout)["species"][0]["rows"] if r.returncode == 0 else []
+check("hindered rotor: table breakdown has internal_rotation",
+      len(rows) == 3 and all("internal_rotation" in x.get("motions", {}) for x in rows), r.stderr)
+r = run("modes", ethane, "--temps", "150,298.15,1000", "--format", "json")
+mspec = json.loads(r.stdout)["species"][0] if r.returncode == 0 else {}
+temps = mspec.get("temperatures", [])
+R = 8.314462618
+check("hindered rotor: modes dof has hindered_rotors, classical 1",
+      len(temps) == 3 and all("hindered_rotors" in t["dof"] for t in temps) and
+      mspec.get("classical_dof", {}).get("hindered_rotors") == 1 and len(mspec.get("vibrations", [])) == 17,
+      r.stderr)
+check("hindered rotor: F(T) sums its motions and equals 2 Cv/R of the table",
+      len(temps) == len(rows) == 3 and all(
+          abs(t["dof"]["translation"] + t["dof"]["rotation"] + t["dof"]["vibration"] +
+              t["dof"]["hindered_rotors"] - t["dof"]["total"]) < 1e-9 and
+          abs(t["dof"]["total"] + t["dof"].get("electronic", 0.0) - 2.0 * x["Cv"] / R) < 1e-6
+          for t, x in zip(temps, rows)), f"{temps} {rows}")
+with tempfile.TemporaryDirectory() as tmp:
+    # Without the rotor the torsion is harmonic: S at 298.15 K differs (by about 1 J/(mol K)).
+    text = open(ethane).read()
+    harmonic = os.path.join(tmp, "harmonic.yaml")
+    open(harmonic, "w").write(text[:text.index("hindered_rotors:")])
+    h = table_rows(harmonic)
+    hr = table_rows(ethane)
+    check("hindered rotor: changes S against the harmonic torsion",
+          len(h) == len(hr) == 3 and all(abs(a["S"] - b["S"]) > 0.1 for a, b in zip(h, hr)), f"{h} {hr}")
+
 failed = results.count(False)
 print(f"{len(results) - failed} passed, {failed} failed")
 sys.exit(1 if failed else 0)
