@@ -325,3 +325,39 @@ TEST_CASE("YAML: Hessian units and errors") {
   CHECK(yaml_error(one_atom + "hessian_unit: J/m^2\n") ==
         "in.yaml:4:1: error: 'hessian_unit' without 'hessian', expected a 'hessian' list beside it");
 }
+
+TEST_CASE("hindered rotors are read with barrier, scan and top") {
+  // Test geometry and wavenumbers (not a measured molecule): two CH3-like tops on z.
+  const std::string head =
+      "name: x\natoms:\n  - [C, 0, 0, 0.75]\n  - [C, 0, 0, -0.75]\n  - [H, 1, 0, 1.1]\n  - [H, 1, 0, -1.1]\n"
+      "frequencies: [300, 800, 900, 1000, 1100, 1200]\n";
+  const Species a = read_species_yaml(
+      head + "hindered_rotors:\n  - {bond: [1, 2], symmetry: 3, barrier: 12.5, replaces: 300.5}\n", "a.yaml");
+  REQUIRE(a.hindered_rotors.size() == 1);
+  const HinderedRotor& r = a.hindered_rotors[0];
+  CHECK(r.bond_atoms == std::array<int, 2>{0, 1});
+  CHECK(r.symmetry == 3);
+  CHECK(*r.barrier_J_per_mol == doctest::Approx(12500.0));
+  CHECK(r.replaces_cm1 == doctest::Approx(300.5));
+  CHECK(r.top_atoms.empty());
+  CHECK(r.where.line == 9);  // the entry, below the key on line 8
+
+  const Species b = read_species_yaml(
+      head +
+          "hindered_rotors:\n  - bond: [2, 1]\n    symmetry: 1\n    top: [2, 4]\n    replaces: 300\n"
+          "    scan: [[0, 0.0], [90, 1.5], [180, 3.0], [270, 1.5]]\n",
+      "b.yaml");
+  REQUIRE(b.hindered_rotors.size() == 1);
+  CHECK(b.hindered_rotors[0].top_atoms == std::vector<int>{1, 3});
+  REQUIRE(b.hindered_rotors[0].scan.size() == 4);
+  CHECK(b.hindered_rotors[0].scan[2].angle_deg == 180.0);
+  CHECK(b.hindered_rotors[0].scan[2].energy_J_per_mol == doctest::Approx(3000.0));
+  CHECK_FALSE(b.hindered_rotors[0].barrier_J_per_mol);
+
+  // A top that holds the far bond atom is refused.
+  CHECK_THROWS_WITH_AS(
+      read_species_yaml(head + "hindered_rotors:\n  - {bond: [1, 2], symmetry: 3, barrier: 1, top: [1, 2], "
+                               "replaces: 300}\n",
+                        "c.yaml"),
+      doctest::Contains("'top' must hold bond atom 1 and not atom 2"), InputError);
+}
