@@ -178,7 +178,9 @@ TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotentia
   double v_max = potential.value_J_per_mol(0.0);
   for (int i = 1; i < 7200; ++i) v_max = std::max(v_max, potential.value_J_per_mol(2.0 * c::pi * i / 7200.0));
   const double range_cm1 = (v_max - potential.minimum_J_per_mol()) / c::wavenumber_J_per_mol;
-  const int M = std::clamp(static_cast<int>(std::ceil(std::sqrt((range_cm1 + 1e5) / B_cm1))), 20, 800);
+  // Clamped as a double first: a huge barrier must not overflow the conversion to int.
+  const double wanted = std::ceil(std::sqrt((range_cm1 + 1e5) / B_cm1));
+  const int M = static_cast<int>(std::clamp(std::isfinite(wanted) ? wanted : 800.0, 20.0, 800.0));
   return torsion_levels(reduced_moment_amu_A2, potential, M);
 }
 
