@@ -15,7 +15,7 @@ TEST_CASE("element table covers H to Xe and Pt, Au, Hg, Pb") {
   CHECK(table.back().atomic_number == 82);
   for (const ElementInfo& e : table) {
     CAPTURE(e.symbol);
-    // Transcription guard: an isotope's mass lies within 0.1 amu of its mass number
+    // Typing guard: an isotope's mass lies within 0.1 amu of its mass number
     // (nuclear binding, common practice), and the standard atomic weight within 2.5 amu
     // of the most abundant isotope's mass for every element in the table.
     CHECK(std::abs(e.isotope_mass_amu - e.mass_number) < 0.1);

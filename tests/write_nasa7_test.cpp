@@ -5,6 +5,7 @@
 #include <fstream>
 #include <sstream>
 
+#include "test_nasa.hpp"
 #include "test_text.hpp"
 #include "vibtherm/error.hpp"
 
@@ -15,20 +16,7 @@ namespace {
 using test::cols;
 using test::lines_of;
 
-Nasa7 o2_record() {
-  Nasa7 n;
-  n.name = "O2";
-  n.note = "TPIS89";
-  n.composition = {{"O", 2}};
-  n.T_low_K = 200.0;
-  n.T_mid_K = 1000.0;
-  n.T_high_K = 3500.0;
-  n.high = {3.28253784E+00,  1.48308754E-03,  -7.57966669E-07, 2.09470555E-10,
-            -2.16717794E-14, -1.08845772E+03, 5.45323129E+00};
-  n.low = {3.78245636E+00, -2.99673416E-03, 9.84730201E-06, -9.68129509E-09,
-           3.24372837E-12, -1.06394356E+03, 3.65767573E+00};
-  return n;
-}
+Nasa7 o2_record() { return test::o2_gri30_record(); }
 
 }  // namespace
 
