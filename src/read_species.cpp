@@ -102,6 +102,16 @@ struct AtomLabel {
   double mass_amu = 0.0;
 };
 
+// An atom of that element and isotope, placed at the origin; both readers set the position.
+Atom atom_of(const AtomLabel& label) {
+  Atom atom;
+  atom.symbol = label.symbol;
+  atom.isotope = label.isotope;
+  atom.mass_number = label.mass_number;
+  atom.mass_amu = label.mass_amu;
+  return atom;
+}
+
 // Resolves an element symbol or isotope label, or says what went wrong.
 AtomLabel resolve_label(std::string_view label, const SourceLocation& where) {
   if (std::optional<IsotopeChoice> iso = find_isotope(label)) {
@@ -398,12 +408,7 @@ std::vector<Atom> YamlReader::atoms(const YAML::Node& node, std::vector<SourceLo
     if (!label.IsScalar())
       error(label,
             which + " has symbol " + describe(label) + ", expected an element symbol or isotope label");
-    AtomLabel resolved = resolve_label(label.Scalar(), at(label));
-    Atom atom;
-    atom.symbol = resolved.symbol;
-    atom.isotope = resolved.isotope;
-    atom.mass_number = resolved.mass_number;
-    atom.mass_amu = resolved.mass_amu;
+    Atom atom = atom_of(resolve_label(label.Scalar(), at(label)));
     for (int k = 0; k < 3; ++k)
       atom.position_angstrom[k] = number(item[k + 1], which + " coordinate " + std::string(1, "xyz"[k]));
     where.push_back(at(item));
@@ -1090,12 +1095,7 @@ Species XyzReader::read(const std::string& text) {
       error(ln, tokens.empty() ? 1 : tokens.front().column,
             which + " line has " + std::to_string(tokens.size()) +
                 " field(s), expected: symbol x y z (ångström)");
-    AtomLabel label = resolve_label(tokens[0].text, {file_, ln, tokens[0].column});
-    Atom atom;
-    atom.symbol = label.symbol;
-    atom.isotope = label.isotope;
-    atom.mass_number = label.mass_number;
-    atom.mass_amu = label.mass_amu;
+    Atom atom = atom_of(resolve_label(tokens[0].text, {file_, ln, tokens[0].column}));
     for (int k = 0; k < 3; ++k)
       atom.position_angstrom[k] = number(tokens[static_cast<std::size_t>(k) + 1], ln,
                                          which + " coordinate " + std::string(1, "xyz"[k]));

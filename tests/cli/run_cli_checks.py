@@ -9,20 +9,13 @@ import subprocess
 import sys
 import tempfile
 
+from harness import Checks
+
 exe, root = sys.argv[1], sys.argv[2]
 examples = os.path.join(root, "examples", "fuel-additive")
 water = os.path.join(examples, "water.yaml")
-results = []
-
-
-def run(*args):
-    return subprocess.run([exe, *args], capture_output=True, text=True)
-
-
-def check(name, condition, detail=""):
-    results.append(condition)
-    print(("ok    " if condition else "FAIL  ") + name + ("" if condition else f"  {detail}"))
-
+checks = Checks(exe)
+run, check = checks.run, checks.check
 
 # table JSON: pinned keys (design.md section 5).
 r = run("table", water, "--temps", "298.15,1000", "--format", "json")
@@ -147,6 +140,4 @@ with tempfile.TemporaryDirectory() as tmp:
     check("hindered rotor: changes S against the harmonic torsion",
           len(h) == len(hr) == 3 and all(abs(a["S"] - b["S"]) > 0.1 for a, b in zip(h, hr)), f"{h} {hr}")
 
-failed = results.count(False)
-print(f"{len(results) - failed} passed, {failed} failed")
-sys.exit(1 if failed else 0)
+checks.finish()

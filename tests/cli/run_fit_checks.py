@@ -11,20 +11,13 @@ import subprocess
 import sys
 import tempfile
 
+from harness import Checks
+
 exe, root = sys.argv[1], sys.argv[2]
 examples = os.path.join(root, "examples", "fuel-additive")
 water = os.path.join(examples, "water.yaml")
-results = []
-
-
-def run(*args):
-    return subprocess.run([exe, *args], capture_output=True, text=True)
-
-
-def check(name, condition, detail=""):
-    results.append(bool(condition))
-    print(("ok    " if condition else "FAIL  ") + name + ("" if condition else f"  {detail}"))
-
+checks = Checks(exe)
+run, check = checks.run, checks.check
 
 temps = "200,298.15,300:3000:100"
 table = {s["name"]: s["rows"] for s in
@@ -102,6 +95,4 @@ with tempfile.TemporaryDirectory() as tmp:
     r = run("eval", out, "--temps", "5000")
     check("extrapolation warns", r.returncode == 0 and "outside the polynomial's range" in r.stderr, r.stderr)
 
-failed = results.count(False)
-print(f"{len(results) - failed} passed, {failed} failed")
-sys.exit(1 if failed else 0)
+checks.finish()
