@@ -8,7 +8,9 @@
 #include <filesystem>
 #include <fstream>
 #include <iostream>
+#include <sstream>
 
+#include "vibtherm/checksum.hpp"
 #include "vibtherm/error.hpp"
 #include "vibtherm/read_species.hpp"
 #include "vibtherm/temperatures.hpp"
@@ -131,6 +133,13 @@ void write_output(const std::string& path, const std::string& content) {
     fs::remove(temp, ec);
     fail({path, 0, 0}, "could not move the finished output into place");
   }
+}
+
+std::string file_sha256(const std::string& path) {
+  std::ifstream in(path, std::ios::binary);
+  std::ostringstream bytes;
+  bytes << in.rdbuf();
+  return sha256_hex(bytes.str());
 }
 
 void log_species_diagnostics(const Batch& batch) {

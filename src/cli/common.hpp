@@ -60,6 +60,9 @@ Batch load_batch(const CommonOptions& options);
 // Writes `content` to `path` ("-" = stdout) through a temporary file renamed into place.
 void write_output(const std::string& path, const std::string& content);
 
+// Lower-case hex SHA-256 of a file's bytes, for provenance records.
+std::string file_sha256(const std::string& path);
+
 // Logs warnings and notes of each prepared species to stderr (spdlog).
 void log_species_diagnostics(const Batch& batch);
 

@@ -3,13 +3,10 @@
 #include <spdlog/spdlog.h>
 
 #include <algorithm>
-#include <fstream>
 #include <iostream>
 #include <memory>
-#include <sstream>
 
 #include "common.hpp"
-#include "vibtherm/checksum.hpp"
 #include "vibtherm/fit_nasa.hpp"
 #include "vibtherm/write_fit_json.hpp"
 #include "vibtherm/write_nasa7.hpp"
@@ -28,13 +25,6 @@ struct FitCliOptions {
   double grid_step_K = 5.0;
   bool no_wrapper = false;
 };
-
-std::string file_sha256(const std::string& path) {
-  std::ifstream in(path, std::ios::binary);
-  std::ostringstream bytes;
-  bytes << in.rdbuf();
-  return sha256_hex(bytes.str());
-}
 
 std::vector<std::pair<std::string, std::string>> model_option_list(const FitCliOptions& o) {
   return {{"standard_state", o.common.standard_state},

@@ -61,6 +61,8 @@ void setup_report(CLI::App& sub) {
     for (const auto& p : batch.species) {
       try {
         species.push_back(gather_report_species(p, report));
+        if (!species.back().input_file.empty())
+          species.back().input_sha256 = file_sha256(species.back().input_file);
         if (!species.back().fit) spdlog::warn("{}: {}", p.species.name, species.back().not_fitted_reason);
       } catch (const InputError& e) {
         if (!o->common.keep_going) throw;
@@ -79,7 +81,18 @@ void setup_report(CLI::App& sub) {
          fmt::format(
              "NASA-7 fit: {:g} to {:g} K, breakpoint {}; H(298.15 K) = ΔfH° from the input", bp.front(),
              bp.back(),
-             report.fit.range.auto_index >= 0 ? std::string("searched") : fmt::format("{:g} K", bp[1]))}};
+             report.fit.range.auto_index >= 0 ? std::string("searched") : fmt::format("{:g} K", bp[1]))},
+        {{"--temps", o->common.temps_text.empty() ? "default: 298.15, 500, 1000, 1500, 2000, 3000 K"
+                                                  : o->common.temps_text},
+         {"--range", o->range.empty() ? "default: 200:1000:3000" : o->range},
+         {"--standard-state", o->common.standard_state},
+         {"--pressure", o->common.pressure_text.empty() ? "the standard state" : o->common.pressure_text},
+         {"--scale", fmt::format("{:g}", o->common.frequency_scale)},
+         {"--transition-state", o->common.transition_state ? "on" : "off"},
+         {"--imaginary-as-real-below", fmt::format("{:g} cm⁻¹", o->common.imaginary_as_real_below_cm1)},
+         {"--allow-mode-count-mismatch", o->common.mode_count_warning ? "on" : "off"},
+         {"--allow-missing-hf", o->allow_missing_hf ? "on" : "off"},
+         {"--t-axis", o->axis}}};
     write_output(o->common.output,
                  write_report_html(species, header,
                                    {o->axis == "linear" ? TemperatureAxis::linear : TemperatureAxis::log}));
