@@ -9,9 +9,7 @@
 #include <filesystem>
 #include <fstream>
 #include <iostream>
-#include <sstream>
 
-#include "vibtherm/checksum.hpp"
 #include "vibtherm/error.hpp"
 #include "vibtherm/read_species.hpp"
 #include "vibtherm/temperatures.hpp"
@@ -97,19 +95,6 @@ void emit_log(const std::vector<LogLine>& log) {
   for (const auto& line : log) spdlog::log(line.level, "{}", line.text);
 }
 
-<<<<<<< HEAD
-std::string file_sha256(const std::string& path) {
-  std::ifstream in(path, std::ios::binary);
-  std::ostringstream bytes;
-  bytes << in.rdbuf();
-  return sha256_hex(bytes.str());
-}
-
-void log_species_diagnostics(const Batch& batch) {
-  for (const auto& p : batch.species) {
-    for (const auto& w : p.warnings) spdlog::warn("{}: {}", p.species.name, w);
-    for (const auto& n : p.notes) spdlog::info("{}: {}", p.species.name, n);
-=======
 std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
                                       const RawProducer& work, std::vector<LogLine>& log) {
   try {
@@ -123,7 +108,6 @@ std::optional<InputError> run_species(const std::string& path, const ModelOption
   } catch (const InputError& e) {
     if (e.where().file.empty()) return InputError({path, 0, 0}, e.message());
     return e;
->>>>>>> main
   }
   return std::nullopt;
 }

@@ -89,20 +89,12 @@ void check_output_is_not_input(const std::string& output, const std::vector<std:
 // Writes `content` to `path` ("-" = stdout) through a temporary file renamed into place.
 void write_output(const std::string& path, const std::string& content);
 
-<<<<<<< HEAD
-// Lower-case hex SHA-256 of a file's bytes, for provenance records.
-std::string file_sha256(const std::string& path);
-
-// Logs warnings and notes of each prepared species to stderr (spdlog).
-void log_species_diagnostics(const Batch& batch);
-=======
 // A species read and prepared on a worker thread, with the bytes of its file.
 struct SpeciesInput {
   const std::string& path;
   const std::string& bytes;
   const PreparedSpecies& prepared;
 };
->>>>>>> main
 
 struct LogLine {
   spdlog::level::level_enum level;

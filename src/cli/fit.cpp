@@ -7,6 +7,7 @@
 #include <memory>
 
 #include "common.hpp"
+#include "vibtherm/checksum.hpp"
 #include "vibtherm/fit_nasa.hpp"
 #include "vibtherm/fit_plan.hpp"
 #include "vibtherm/write_fit_json.hpp"

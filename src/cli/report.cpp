@@ -8,6 +8,7 @@
 #include <memory>
 
 #include "common.hpp"
+#include "vibtherm/checksum.hpp"
 #include "vibtherm/write_report.hpp"
 
 namespace vibtherm::cli {
@@ -64,7 +65,8 @@ void setup_report(CLI::App& sub) {
         o->common, paths,
         [&](const SpeciesInput& in, std::vector<LogLine>& log) {
           ReportSpecies r = gather_report_species(in.prepared, report);
-          if (!r.input_file.empty()) r.input_sha256 = file_sha256(r.input_file);
+          r.input_file = in.path;
+          r.input_sha256 = sha256_hex(in.bytes);
           if (!r.fit)
             log.push_back(
                 {spdlog::level::warn, fmt::format("{}: {}", in.prepared.species.name, r.not_fitted_reason)});
