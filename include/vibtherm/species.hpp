@@ -54,7 +54,10 @@ struct RigidRotorData {
 
 struct Species {
   std::string name;
-  SourceLocation origin;    // file the species came from
+  SourceLocation origin;  // file the species came from
+  // Where each top-level key was given (YAML), so checks made after reading point at the key
+  // at fault; key_location() falls back to `origin`.
+  std::map<std::string, SourceLocation> key_locations;
   std::vector<Atom> atoms;  // empty when `rotor_data` is used
   std::optional<RigidRotorData> rotor_data;
   std::map<std::string, int> formula;   // element -> count; from atoms or `formula`
@@ -70,5 +73,10 @@ struct Species {
   bool transition_state = false;
   std::vector<HinderedRotor> hindered_rotors;
 };
+
+inline SourceLocation key_location(const Species& species, const std::string& key) {
+  const auto it = species.key_locations.find(key);
+  return it == species.key_locations.end() ? species.origin : it->second;
+}
 
 }  // namespace vibtherm

@@ -45,9 +45,7 @@ void setup_report(CLI::App& sub) {
       ->capture_default_str();
   sub.add_flag("--allow-missing-hf", o->allow_missing_hf,
                "report species without enthalpy_of_formation, their NASA part marked as not fitted");
-  sub.footer(
-      "Writes report.html unless -o says otherwise ('-' = standard output). Default table temperatures: "
-      "298.15, 500, 1000, 1500, 2000, 3000 K.");
+  sub.footer("Writes report.html unless -o says otherwise ('-' = standard output).");
   sub.callback([o] {
     ReportOptions report;
     report.temperatures_K = temperatures_or(o->common, default_report_temperatures());
