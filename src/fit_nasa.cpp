@@ -251,6 +251,7 @@ std::vector<ElementAmount> species_composition(const Species& species) {
   } else {
     for (const auto& [symbol, n] : species.formula) counts[symbol] += n;
   }
+  if (!species.surface_site.empty()) counts[species.surface_site] += 1.0;
   std::vector<ElementAmount> out;
   for (const char* first : {"C", "H"}) {
     auto it = counts.find(first);

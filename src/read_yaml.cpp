@@ -6,6 +6,7 @@
 #include <yaml-cpp/yaml.h>
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 #include <set>
 
@@ -40,7 +41,8 @@ const std::vector<std::string> yaml_keys = {"name",
                                             "formula",
                                             "hindered_rotors",
                                             "hessian",
-                                            "hessian_unit"};
+                                            "hessian_unit",
+                                            "surface_site"};
 
 // A full Hessian may differ from its transpose by this much, relative to its largest
 // element, and is then symmetrised: finite-difference Hessians and values printed to five
@@ -397,6 +399,18 @@ Species YamlReader::read(const std::string& text) {
       species.phase = Phase::adsorbate;
     else
       error(*p, "'phase' is " + quote(phase) + ", expected gas or adsorbate");
+  }
+  if (const YAML::Node* site = find(e, "surface_site")) {
+    const std::string symbol = YamlValues::text(*site, "'surface_site'");
+    const bool shaped = (symbol.size() == 1 || symbol.size() == 2) &&
+                        std::isupper(static_cast<unsigned char>(symbol[0])) &&
+                        (symbol.size() == 1 || std::islower(static_cast<unsigned char>(symbol[1])));
+    if (!shaped)
+      error(*site,
+            "'surface_site' is " + quote(symbol) + ", expected an element symbol of the site such as Pt");
+    if (species.phase != Phase::adsorbate)
+      error(e["surface_site"].key, "'surface_site' is for an adsorbate, expected 'phase: adsorbate' with it");
+    species.surface_site = symbol;
   }
   if (const YAML::Node* t = find(e, "transition_state"))
     species.transition_state = boolean(*t, "'transition_state'");

@@ -70,6 +70,9 @@ struct Species {
   std::vector<ElectronicLevel> electronic_levels{{0.0, 1}};
   std::optional<double> enthalpy_of_formation_J_per_mol;  // ΔfH°(298.15 K)
   Phase phase = Phase::gas;
+  // Adsorbate only: the site's element symbol (e.g. "Pt"), added once to the composition of
+  // the NASA record as surface-kinetics files expect; not part of the molar mass. Empty: none.
+  std::string surface_site;
   bool transition_state = false;
   std::vector<HinderedRotor> hindered_rotors;
 };

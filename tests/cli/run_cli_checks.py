@@ -153,4 +153,19 @@ for sub, default in [("table", "Default temperatures: 298.15 K, then 300 to 3000
     check(f"{sub} --help states defaults, -q and exit codes",
           default in r.stdout and "-q, --quiet" in r.stdout and "Exit status" in r.stdout, r.stdout[-400:])
 
+# An adsorbate's surface site joins the NASA-7 composition (once); a gas cannot have one.
+with tempfile.TemporaryDirectory() as tmp:
+    base = open(os.path.join(root, "tests", "data", "adsorbed-water.yaml"), encoding="utf-8").read()
+    site = os.path.join(tmp, "site.yaml")
+    open(site, "w", encoding="utf-8").write(base + "surface_site: Pt\n")
+    r = run("fit", site, "--allow-missing-hf", "-q")
+    first = next((line for line in r.stdout.splitlines() if line.rstrip().endswith("1") and "G" in line[40:50]
+                  or line[44:45] == "S"), "")
+    check("surface site in the NASA-7 composition", r.returncode == 0 and "PT  1" in first.upper(), r.stdout + r.stderr)
+    gas = os.path.join(tmp, "gas-site.yaml")
+    open(gas, "w", encoding="utf-8").write(open(water, encoding="utf-8").read() + "surface_site: Pt\n")
+    r = run("table", gas)
+    check("surface site on a gas is an input error", r.returncode == 2 and "'surface_site' is for an adsorbate" in r.stderr,
+          r.stderr)
+
 checks.finish()
