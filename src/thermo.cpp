@@ -158,6 +158,19 @@ void replace_torsions(PreparedSpecies& p) {
   p.vibrations_cm1 = std::move(kept);
 }
 
+// Chooses the low-frequency treatment (option, else the species key, else harmonic) and
+// lists the modes it or a separate enthalpy scale factor changes.
+void plan_low_frequency(PreparedSpecies& p) {
+  LowFrequencyOptions lf = p.options.low_frequency;
+  lf.method =
+      p.options.low_frequency_method.value_or(p.species.low_frequency.value_or(LowFrequencyMethod::harmonic));
+  std::vector<double> enthalpy_cm1;
+  for (double v : p.vibrations_cm1) enthalpy_cm1.push_back(v * (p.scale.enthalpy / p.scale.entropy));
+  p.vibration_adjustment = plan_vibration_adjustment(lf, p.vibrations_cm1, enthalpy_cm1);
+  if (const std::string note = low_frequency_note(p.vibration_adjustment); !note.empty())
+    p.notes.push_back(note);
+}
+
 // Thermal functions at T without the H(298.15) reference.
 ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
   ThermoPoint point;
@@ -169,6 +182,9 @@ ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
     point.rotation = rigid_rotor_terms(p.rotor.rotational_temperatures_K, p.species.symmetry_number, T_K);
   }
   for (double v : p.vibrations_cm1) point.vibration += harmonic_oscillator_terms(v, T_K);
+  // The one hook of the low-frequency module: its correction to the harmonic sum.
+  if (!p.vibration_adjustment.modes.empty())
+    point.vibration += vibration_adjustment_terms(p.vibration_adjustment, T_K);
   point.electronic = electronic_terms(p.species.electronic_levels, T_K);
   for (const HinderedRotorModel& r : p.hindered_rotors)
     point.internal_rotation += hindered_rotor_terms(r.levels, r.input.symmetry, T_K);
@@ -203,10 +219,11 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
   p.rotor = analyse_rotor(species, options.linear_tolerance_amu_A2);
   if (species.hessian_J_per_m2) frequencies_from_hessian(p);
 
+  p.scale = resolve_scale_factors(options.scale, species.scale, options.frequency_scale, species.origin);
+  p.options.frequency_scale = p.scale.entropy;  // the factor of vibrations_cm1
   std::vector<double> scaled;
-  for (double v : p.species.frequencies_cm1) scaled.push_back(v * options.frequency_scale);
-  if (options.frequency_scale != 1.0)
-    p.notes.push_back(fmt::format("wavenumbers scaled by {}", options.frequency_scale));
+  for (double v : p.species.frequencies_cm1) scaled.push_back(v * p.scale.entropy);
+  if (const std::string note = scale_factors_note(p.scale); !note.empty()) p.notes.push_back(note);
 
   const int expected = expected_vibration_count(species, p.rotor.type);
   const int given = static_cast<int>(p.species.frequencies_cm1.size());
@@ -221,14 +238,19 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
   apply_imaginary_policy(p, scaled);
 
   replace_torsions(p);
+  plan_low_frequency(p);
 
   double sum_cm1 = 0.0;
   for (double v : p.vibrations_cm1) sum_cm1 += v;
-  p.zero_point_energy_J_per_mol = 0.5 * sum_cm1 * c::wavenumber_J_per_mol;
+  p.zero_point_energy_J_per_mol = 0.5 * sum_cm1 * (p.scale.zpe / p.scale.entropy) * c::wavenumber_J_per_mol;
   for (const HinderedRotorModel& r : p.hindered_rotors)
     p.zero_point_energy_J_per_mol += r.levels.zero_point_energy_J_per_mol;
   if (!p.is_gas) p.notes.push_back("adsorbate: all 3N motions treated as harmonic vibrations");
-  p.H298_minus_H0_J_per_mol = evaluate_terms(p, c::reference_temperature_K).H_minus_H0_J_per_mol;
+  const ThermoPoint at298 = evaluate_terms(p, c::reference_temperature_K);
+  p.H298_minus_H0_J_per_mol = at298.H_minus_H0_J_per_mol;
+  for (const SoftMode& m : soft_harmonic_modes(p.vibration_adjustment, p.vibrations_cm1))
+    p.warnings.push_back(soft_mode_warning(m, p.vibration_adjustment.options.soft_mode_warning_below_cm1,
+                                           at298.S_J_per_mol_K));
   return p;
 }
 

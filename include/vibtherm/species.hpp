@@ -15,6 +15,19 @@ namespace vibtherm {
 
 enum class Phase { gas, adsorbate };
 
+// Treatment of low-frequency vibrations (low_frequency.hpp): harmonic oscillators,
+// Grimme's quasi-rigid-rotor-harmonic-oscillator interpolation, or a wavenumber floor.
+enum class LowFrequencyMethod { harmonic, qrrho, floor };
+
+// Frequency scale factors per quantity, as given (input key `scale`, or a method file);
+// an absent factor falls back to the one-for-all --scale.
+struct ScaleFactors {
+  std::optional<double> zpe;       // zero-point energy
+  std::optional<double> enthalpy;  // thermal enthalpy H(T) - H(0)
+  std::optional<double> entropy;   // entropy and heat capacity
+  bool empty() const { return !zpe && !enthalpy && !entropy; }
+};
+
 struct Atom {
   std::string symbol;     // element symbol, e.g. "C"
   std::string isotope;    // isotope label as given ("D", "C13"); empty = most abundant
@@ -69,6 +82,8 @@ struct Species {
   Phase phase = Phase::gas;
   bool transition_state = false;
   std::vector<HinderedRotor> hindered_rotors;
+  std::optional<LowFrequencyMethod> low_frequency;  // input key; --low-freq overrides
+  ScaleFactors scale;                               // input key `scale`
 };
 
 }  // namespace vibtherm

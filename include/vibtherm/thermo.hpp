@@ -3,13 +3,16 @@
 // adsorbate) functions at any temperature, with the per-motion breakdown.
 #pragma once
 
+#include <optional>
 #include <string>
 #include <vector>
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/geometry.hpp"
 #include "vibtherm/hindered_rotor.hpp"
+#include "vibtherm/low_frequency.hpp"
 #include "vibtherm/partition.hpp"
+#include "vibtherm/scale_factors.hpp"
 #include "vibtherm/species.hpp"
 
 namespace vibtherm {
@@ -18,9 +21,12 @@ enum class StandardState { bar, atm, molar };  // 1 bar (IUPAC default), 1 atm, 
 
 struct ModelOptions {
   StandardState standard_state = StandardState::bar;
-  double pressure_Pa = constants::bar_Pa;    // used for bar/atm; overrides if set explicitly
-  double frequency_scale = 1.0;              // multiplies every wavenumber
-  bool transition_state = false;             // drop one imaginary mode as reaction coordinate
+  double pressure_Pa = constants::bar_Pa;  // used for bar/atm; overrides if set explicitly
+  double frequency_scale = 1.0;            // multiplies every wavenumber (one for all quantities)
+  ScaleFactors scale;                      // per quantity; each overrides frequency_scale and the file
+  std::optional<LowFrequencyMethod> low_frequency_method;  // overrides the species' low_frequency
+  LowFrequencyOptions low_frequency;                       // parameters; its method is set from the two above
+  bool transition_state = false;                           // drop one imaginary mode as reaction coordinate
   double imaginary_as_real_below_cm1 = 0.0;  // |ν̃| below this: treated as real, with a warning
   bool mode_count_mismatch_is_warning = false;
   double linear_tolerance_amu_A2 = default_linear_tolerance_amu_A2;
@@ -34,6 +40,8 @@ struct PreparedSpecies {
   std::vector<double> vibrations_cm1;  // real wavenumbers used, scaled, input order,
                                        // without the torsions replaced by hindered rotors
   std::vector<HinderedRotorModel> hindered_rotors;
+  ResolvedScaleFactors scale;                // factors used (vibrations_cm1 carry the entropy one)
+  VibrationAdjustment vibration_adjustment;  // low-frequency treatment and enthalpy scaling
   std::vector<double> used_frequencies_cm1;  // as reported: includes a dropped reaction coordinate (negative)
   double zero_point_energy_J_per_mol = 0.0;  // harmonic ½hcν̃ sum plus the rotors' own ZPE
   double H298_minus_H0_J_per_mol = 0.0;      // thermal enthalpy at 298.15 K, the table's reference
