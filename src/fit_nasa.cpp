@@ -29,157 +29,22 @@
 #include <limits>
 #include <map>
 
+#include "fit_terms.hpp"
 #include "vibtherm/constants.hpp"
 #include "vibtherm/elements.hpp"
 #include "vibtherm/error.hpp"
+#include "vibtherm/fit_plan.hpp"
 
 namespace vibtherm {
 
+using namespace fit_detail;
+
 namespace {
 
-constexpr double kScale_K = 1000.0;
-constexpr double kWeightFloor_Cp_over_R = 0.5;
-constexpr double kJointTolerance_K = 1e-9;
 constexpr double kBoundsTolerance_Cp_over_R = 1e-6;
 constexpr double R = constants::gas_constant_J_per_mol_K;
 
-std::vector<int> exponents_of(NasaForm form) {
-  if (form == NasaForm::nasa7) return {0, 1, 2, 3, 4};
-  return {-2, -1, 0, 1, 2, 3, 4};
-}
-
-// Cp/R, its τ derivative, ∫Cp/R dτ (the H/R basis in units of 1000 K) and ∫Cp/(Rτ) dτ
-// (the S/R basis) of one term τ^e.
-double cp_term(int e, double tau) { return std::pow(tau, e); }
-double dcp_term(int e, double tau) { return e == 0 ? 0.0 : e * std::pow(tau, e - 1); }
-double h_term(int e, double tau) { return e == -1 ? std::log(tau) : std::pow(tau, e + 1) / (e + 1); }
-double s_term(int e, double tau) { return e == 0 ? std::log(tau) : std::pow(tau, e) / e; }
-
 const char* form_name(NasaForm form) { return form == NasaForm::nasa7 ? "NASA-7" : "NASA-9"; }
-
-int range_index_of(const std::vector<double>& bp, double T_K) {
-  const int n = static_cast<int>(bp.size()) - 1;
-  for (int r = 0; r < n; ++r)
-    if (T_K <= bp[r + 1]) return r;
-  return n - 1;
-}
-
-bool in_range(const std::vector<double>& bp, int r, double T_K) {
-  return T_K >= bp[r] - kJointTolerance_K && T_K <= bp[r + 1] + kJointTolerance_K;
-}
-
-std::vector<Nasa9Range> solve(const FitInput& in, const std::vector<double>& bp, NasaForm form,
-                              bool slope_continuous) {
-  const std::vector<int> ex = exponents_of(form);
-  const int m = static_cast<int>(ex.size());
-  const int per = m + 2;  // α_0..α_{m-1}, β_H, β_S
-  const int nr = static_cast<int>(bp.size()) - 1;
-  const int n = nr * per;
-
-  // Design matrix: one row per (sample, range containing it).
-  std::vector<std::pair<int, int>> rows;  // (sample, range)
-  for (int i = 0; i < static_cast<int>(in.samples.size()); ++i)
-    for (int r = 0; r < nr; ++r)
-      if (in_range(bp, r, in.samples[i].T_K)) rows.emplace_back(i, r);
-  for (int r = 0; r < nr; ++r) {
-    const auto count = std::count_if(rows.begin(), rows.end(), [r](const auto& p) { return p.second == r; });
-    if (count < m)
-      fail({}, fmt::format("fit range {:g}-{:g} K holds {} grid points, fewer than its {} coefficients: "
-                           "widen the range or refine the grid",
-                           bp[r], bp[r + 1], count, m));
-  }
-  Eigen::MatrixXd A = Eigen::MatrixXd::Zero(static_cast<Eigen::Index>(rows.size()), n);
-  Eigen::VectorXd y(static_cast<Eigen::Index>(rows.size()));
-  for (std::size_t j = 0; j < rows.size(); ++j) {
-    const FitSample& s = in.samples[rows[j].first];
-    const int r = rows[j].second;
-    const double tau = s.T_K / kScale_K;
-    const double w = 1.0 / std::max(s.Cp_over_R, kWeightFloor_Cp_over_R);
-    for (int k = 0; k < m; ++k) A(j, r * per + k) = w * cp_term(ex[k], tau);
-    y(j) = w * s.Cp_over_R;
-  }
-
-  // Equality constraints.
-  std::vector<Eigen::VectorXd> crow;
-  std::vector<double> cval;
-  auto joint = [&](int r, double tau, auto basis, int beta) {
-    Eigen::VectorXd c = Eigen::VectorXd::Zero(n);
-    for (int k = 0; k < m; ++k) {
-      c(r * per + k) = basis(ex[k], tau);
-      c((r + 1) * per + k) = -basis(ex[k], tau);
-    }
-    if (beta >= 0) {
-      c(r * per + m + beta) = 1.0;
-      c((r + 1) * per + m + beta) = -1.0;
-    }
-    crow.push_back(c);
-    cval.push_back(0.0);
-  };
-  for (int r = 0; r + 1 < nr; ++r) {
-    const double tau = bp[r + 1] / kScale_K;
-    joint(r, tau, cp_term, -1);
-    if (slope_continuous) joint(r, tau, dcp_term, -1);
-    joint(r, tau, h_term, 0);
-    joint(r, tau, s_term, 1);
-  }
-  {
-    const double T0 = constants::reference_temperature_K;
-    const int r = range_index_of(bp, T0);
-    const double tau = T0 / kScale_K;
-    Eigen::VectorXd ch = Eigen::VectorXd::Zero(n), cs = Eigen::VectorXd::Zero(n);
-    for (int k = 0; k < m; ++k) {
-      ch(r * per + k) = h_term(ex[k], tau);
-      cs(r * per + k) = s_term(ex[k], tau);
-    }
-    ch(r * per + m) = 1.0;
-    cs(r * per + m + 1) = 1.0;
-    crow.push_back(ch);
-    cval.push_back(in.H298_over_R / kScale_K);
-    crow.push_back(cs);
-    cval.push_back(in.S298_over_R);
-  }
-  const int p = static_cast<int>(crow.size());
-  Eigen::MatrixXd Ct(n, p);
-  Eigen::VectorXd d(p);
-  for (int i = 0; i < p; ++i) {
-    Ct.col(i) = crow[i];
-    d(i) = cval[i];
-  }
-
-  // Nullspace method: Cᵀ P = Q [R1; 0]; x = Q1 R1⁻ᵀ Pᵀ d + Q2 z.
-  Eigen::ColPivHouseholderQR<Eigen::MatrixXd> cqr(Ct);
-  if (cqr.rank() < p) fail({}, "NASA fit: the continuity and 298.15 K constraints are linearly dependent");
-  const Eigen::MatrixXd Q = cqr.householderQ();
-  const Eigen::MatrixXd R1 = cqr.matrixR().topLeftCorner(p, p).triangularView<Eigen::Upper>();
-  const Eigen::VectorXd Ptd = cqr.colsPermutation().transpose() * d;
-  const Eigen::VectorXd u = R1.transpose().triangularView<Eigen::Lower>().solve(Ptd);
-  const Eigen::VectorXd x0 = Q.leftCols(p) * u;
-  const Eigen::MatrixXd N = Q.rightCols(n - p);
-  Eigen::ColPivHouseholderQR<Eigen::MatrixXd> lsq(A * N);
-  const Eigen::VectorXd z = lsq.solve(y - A * x0);
-  const Eigen::VectorXd x = x0 + N * z;
-
-  // Back to kelvin: a_k = α_k / 1000^e_k; the ln T terms shift the constants
-  // (H/R: e = −1 term α s ln τ = a ln T − a ln s; S/R: e = 0 term likewise).
-  std::vector<Nasa9Range> out(nr);
-  const double ln_s = std::log(kScale_K);
-  for (int r = 0; r < nr; ++r) {
-    Nasa9Range& range = out[r];
-    range.T_low_K = bp[r];
-    range.T_high_K = bp[r + 1];
-    double bH = kScale_K * x(r * per + m);
-    double bS = x(r * per + m + 1);
-    for (int k = 0; k < m; ++k) {
-      const double alpha = x(r * per + k);
-      range.a[ex[k] + 2] = alpha / std::pow(kScale_K, ex[k]);
-      if (ex[k] == -1) bH -= kScale_K * alpha * ln_s;
-      if (ex[k] == 0) bS -= alpha * ln_s;
-    }
-    range.b1 = bH;
-    range.b2 = bS;
-  }
-  return out;
-}
 
 std::vector<RangeErrors> errors_of(const FitInput& in, const std::vector<Nasa9Range>& ranges) {
   std::vector<RangeErrors> out;
@@ -314,37 +179,37 @@ FitRange parse_fit_range(std::string_view text, NasaForm form) {
 }
 
 FitResult fit_samples(const FitInput& input, const FitOptions& options) {
+  std::vector<double> temperatures;
+  for (const FitSample& s : input.samples) temperatures.push_back(s.T_K);
+  return fit_samples(input, FitPlan(options, std::move(temperatures)));
+}
+
+FitResult fit_samples(const FitInput& input, const FitPlan& plan) {
+  const FitOptions& options = plan.options();
+  for (std::size_t i = 0; i < input.samples.size() && i < plan.grid_K().size(); ++i)
+    if (std::abs(input.samples[i].T_K - plan.grid_K()[i]) > kJointTolerance_K)
+      fail({}, fmt::format("NASA fit: sample {} at {:g} K is off the plan's grid ({:g} K)", i + 1,
+                           input.samples[i].T_K, plan.grid_K()[i]));
   FitResult result;
   result.name = input.name;
   result.form = options.form;
   result.bounds = input.bounds;
-  std::vector<double> bp = options.range.breakpoints_K;
-  const int ai = options.range.auto_index;
-  if (ai >= 0) {
-    // Search the `auto` breakpoint on a grid for the smallest maximum relative Cp error.
-    const double lo = bp[ai - 1] + options.auto_margin_K;
-    const double hi = bp[ai + 1] - options.auto_margin_K;
+  std::size_t chosen = 0;
+  if (options.range.auto_index >= 0) {
+    // Search the `auto` breakpoint on its candidates for the smallest maximum relative Cp error.
     double best = std::numeric_limits<double>::infinity();
-    double best_T = std::numeric_limits<double>::quiet_NaN();
-    for (double t = std::ceil(lo / options.auto_step_K) * options.auto_step_K; t <= hi + 1e-9;
-         t += options.auto_step_K) {
-      bp[ai] = t;
-      const auto ranges = solve(input, bp, options.form, options.Cp_slope_continuous);
-      const double worst = worst_Cp_relative(errors_of(input, ranges));
+    for (std::size_t c = 0; c < plan.candidate_count(); ++c) {
+      const double worst = worst_Cp_relative(errors_of(input, plan.solve(c, input)));
       if (worst < best) {
         best = worst;
-        best_T = t;
+        chosen = c;
       }
     }
-    if (std::isnan(best_T))
-      fail({}, fmt::format("--range: no 'auto' candidate between {} and {} K (need {} K margins)", bp[ai - 1],
-                           bp[ai + 1], options.auto_margin_K));
-    bp[ai] = best_T;
-    result.searched_index = ai;
+    result.searched_index = options.range.auto_index;
     result.searched_max_Cp_relative = best;
   }
-  result.breakpoints_K = bp;
-  result.ranges = solve(input, bp, options.form, options.Cp_slope_continuous);
+  result.breakpoints_K = plan.breakpoints_K(chosen);
+  result.ranges = plan.solve(chosen, input);
   result.errors = errors_of(input, result.ranges);
   result.excursions = excursions_of(input, result.ranges);
 
@@ -415,6 +280,11 @@ double species_molar_mass_g_per_mol(const Species& species) {
 }
 
 SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& options) {
+  return fit_species(prepared, FitPlan(options));
+}
+
+SpeciesFit fit_species(const PreparedSpecies& prepared, const FitPlan& plan) {
+  const FitOptions& options = plan.options();
   const Species& sp = prepared.species;
   SpeciesFit out;
   if (!sp.enthalpy_of_formation_J_per_mol && !options.allow_missing_hf)
@@ -427,16 +297,6 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& option
   out.enthalpy_of_formation_J_per_mol = sp.enthalpy_of_formation_J_per_mol.value_or(0.0);
   if (out.enthalpy_of_formation_missing)
     out.notes.push_back("enthalpy of formation missing: H(298.15 K) set to 0 (--allow-missing-hf)");
-
-  const auto& bp = options.range.breakpoints_K;
-  const double T_lo = bp.front(), T_hi = bp.back();
-  std::vector<double> grid;
-  for (double t = T_lo; t < T_hi; t += options.grid_step_K) grid.push_back(t);
-  for (double t : bp)
-    if (!std::isnan(t)) grid.push_back(t);
-  std::sort(grid.begin(), grid.end());
-  grid.erase(std::unique(grid.begin(), grid.end(), [](double a, double b) { return std::abs(a - b) < 1e-9; }),
-             grid.end());
 
   const ThermoPoint ref = evaluate(prepared, constants::reference_temperature_K);
   // A hindered rotor's Cv/R passes its free-rotor limit ½ near the barrier-crossing
@@ -452,7 +312,7 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& option
   in.name = sp.name;
   in.H298_over_R = out.enthalpy_of_formation_J_per_mol / R;
   in.S298_over_R = ref.S_J_per_mol_K / R;
-  for (const ThermoPoint& p : tabulate(prepared, grid)) {
+  for (const ThermoPoint& p : tabulate(prepared, plan.grid_K())) {
     in.samples.push_back(FitSample{p.T_K, p.Cp_J_per_mol_K / R,
                                    (out.enthalpy_of_formation_J_per_mol + p.H_minus_H298_J_per_mol) / R,
                                    p.S_J_per_mol_K / R, p.electronic.Cp_over_R + rotor_excess(p)});
@@ -465,7 +325,7 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& option
   in.bounds.lower_over_R = prepared.is_gas ? 2.5 + rotation : 0.0;
   in.bounds.upper_over_R = classical_Cv_over_R(prepared) + (prepared.is_gas ? 1.0 : 0.0);
 
-  out.fit = fit_samples(in, options);
+  out.fit = fit_samples(in, plan);
   out.molar_mass_g_per_mol = species_molar_mass_g_per_mol(sp);
   const auto composition = species_composition(sp);
 

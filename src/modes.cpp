@@ -111,6 +111,11 @@ ModesReport analyse_modes(const PreparedSpecies& prepared, const std::vector<dou
     m.unfreezes_at_K = m.theta_K / x_unfreeze;
     m.half_active_at_K = m.theta_K / x_half;
     m.active_at_K = m.theta_K / x_active;
+    if (const AdjustedMode* a = prepared.vibration_adjustment.find(static_cast<int>(i)); a && a->treated) {
+      m.treatment = low_frequency_method_name(prepared.vibration_adjustment.options.method);
+      m.qrrho_weight = a->qrrho_weight;
+      m.floor_cm1 = a->floor_cm1;
+    }
     report.modes.push_back(m);
   }
 
@@ -128,8 +133,11 @@ ModesReport analyse_modes(const PreparedSpecies& prepared, const std::vector<dou
         point.dof.translation + point.dof.rotation + point.dof.vibration + point.dof.hindered_rotors;
     point.modes.reserve(report.modes.size());
     for (const ModeConstants& m : report.modes) {
-      // The engine's own oscillator, so the modes add up to its vibrational term.
-      const double share = harmonic_oscillator_terms(m.wavenumber_cm1, T).Cv_over_R;
+      // The engine's own oscillator (or its low-frequency treatment, or the enthalpy-scaled
+      // mode), so the modes add up to its vibrational term.
+      const AdjustedMode* a = prepared.vibration_adjustment.find(m.index - 1);
+      const double share = a ? adjusted_mode_terms(prepared.vibration_adjustment.options, *a, T).Cv_over_R
+                             : harmonic_oscillator_terms(m.wavenumber_cm1, T).Cv_over_R;
       point.modes.push_back({share, classify_mode(share, thresholds)});
     }
     report.points.push_back(std::move(point));

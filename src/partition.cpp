@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <numbers>
 
 #include "vibtherm/constants.hpp"
 
@@ -91,6 +92,95 @@ MotionTerms harmonic_oscillator_terms(double wavenumber_cm1, double T_K) {
   v.Cv_over_R = v.Cp_over_R = x * x * e / (one_minus_e * one_minus_e);
   v.S_over_R = v.U_over_RT + v.ln_q;
   return v;
+}
+
+MotionTerms harmonic_oscillators_terms(std::span<const double> theta_K, double T_K) {
+  MotionTerms v;
+  const double inv_T = 1.0 / T_K;
+  double product = 1.0;  // Π(1 − e^{−x}) = product · 2^exponent
+  int exponent = 0;
+  double deficit = 0.0;  // 1 − Π, accurate while no rescaling happened
+  double U = 0.0, Cv = 0.0;
+  for (double theta : theta_K) {
+    const double x = theta * inv_T;
+    if (x > 700.0) continue;  // frozen: e^{−x} underflows (as harmonic_oscillator_terms)
+    // Below x = 0.5, 1 − e^{−x} from expm1 keeps its digits and e^{−x} = 1 + expm1 ≥ 0.6
+    // loses none; above, e^{−x} ≤ 0.61 and 1 − e^{−x} ≥ 0.39 lose none either.
+    double e, one_minus_e;
+    if (x < 0.5) {
+      const double m = std::expm1(-x);
+      e = 1.0 + m;
+      one_minus_e = -m;
+    } else {
+      e = std::exp(-x);
+      one_minus_e = 1.0 - e;
+    }
+    const double ratio = e / one_minus_e;
+    U += x * ratio;
+    Cv += x * x * ratio / one_minus_e;
+    if (exponent == 0) deficit += e * product;  // 1 − Π(1−e) grows by e·Π
+    product *= one_minus_e;
+    if (product < 0x1p-500) {  // rescale long before the smallest normal double
+      int shift = 0;
+      product = std::frexp(product, &shift);
+      exponent += shift;
+    }
+  }
+  const double ln_product = exponent == 0 && deficit < 0.5 ? std::log1p(-deficit)
+                                                           : std::log(product) + exponent * std::numbers::ln2;
+  v.ln_q = -ln_product;
+  v.U_over_RT = v.H_over_RT = U;
+  v.Cv_over_R = v.Cp_over_R = Cv;
+  v.S_over_R = U + v.ln_q;
+  return v;
+}
+
+MotionTerms LogLinearTerms::at(double ln_T) const {
+  MotionTerms t = fixed;
+  t.ln_q = ln_q_at_1K + power * ln_T;
+  t.S_over_R = t.ln_q + t.H_over_RT;  // translation: ln(q/N) + 1 + U/RT; rotation: ln q + U/RT
+  return t;
+}
+
+namespace {
+
+// ln[(2π m k / h²)^{3/2}] + ln(V/N at 1 K) with V/N ∝ T^{power − 3/2}.
+LogLinearTerms translation_law_with(double mass_amu, double ln_volume_at_1K, double volume_power) {
+  const double m = mass_amu * c::atomic_mass_constant_kg;
+  const double thermal_per_K = 2.0 * c::pi * m * c::boltzmann_J_per_K / (c::planck_J_s * c::planck_J_s);
+  LogLinearTerms t;
+  t.ln_q_at_1K = 1.5 * std::log(thermal_per_K) + ln_volume_at_1K;
+  t.power = 1.5 + volume_power;
+  t.fixed = translation_from_ln_q(0.0);
+  return t;
+}
+
+}  // namespace
+
+LogLinearTerms translation_law(double mass_amu, double pressure_Pa) {
+  return translation_law_with(mass_amu, std::log(c::boltzmann_J_per_K / pressure_Pa), 1.0);
+}
+
+LogLinearTerms translation_law_concentration(double mass_amu, double concentration_mol_per_m3) {
+  return translation_law_with(mass_amu, -std::log(concentration_mol_per_m3 * c::avogadro_per_mol), 0.0);
+}
+
+LogLinearTerms rigid_rotor_law(std::span<const double> rotational_temperatures_K, int symmetry_number) {
+  LogLinearTerms r;
+  if (rotational_temperatures_K.empty()) return r;
+  const double ln_sigma = std::log(static_cast<double>(symmetry_number));
+  if (rotational_temperatures_K.size() == 1) {
+    r.ln_q_at_1K = -std::log(rotational_temperatures_K[0]) - ln_sigma;
+    r.power = 1.0;
+  } else {
+    double ln_theta_product = 0.0;
+    for (double theta : rotational_temperatures_K) ln_theta_product += std::log(theta);
+    r.ln_q_at_1K = 0.5 * std::log(c::pi) - 0.5 * ln_theta_product - ln_sigma;
+    r.power = 1.5;
+  }
+  r.fixed.U_over_RT = r.fixed.H_over_RT = r.power;
+  r.fixed.Cv_over_R = r.fixed.Cp_over_R = r.power;
+  return r;
 }
 
 MotionTerms electronic_terms(std::span<const ElectronicLevel> levels, double T_K) {

@@ -52,6 +52,12 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
         fmt::format("transition state: the imaginary mode {:.1f}i cm^-1 is the reaction "
                     "coordinate and is left out of the partition function",
                     std::abs(*it)));
+    p.tunnelling = TransitionStateTunnelling{std::abs(*it), std::nullopt};
+    if (const auto& b = p.species.tunnelling) {
+      p.tunnelling->eckart = EckartBarrier{b->forward_J_per_mol, b->reverse_J_per_mol, std::abs(*it)};
+      validate(*p.tunnelling->eckart);
+    }
+    p.notes.push_back(tunnelling_note(*p.tunnelling));
   }
   std::vector<double> rejected;
   for (size_t i = 0; i < scaled.size(); ++i) {
@@ -171,36 +177,73 @@ void plan_low_frequency(PreparedSpecies& p) {
     p.notes.push_back(note);
 }
 
-// Thermal functions at T without the H(298.15) reference.
-ThermoPoint evaluate_terms(const PreparedSpecies& p, double T_K) {
-  ThermoPoint point;
-  point.T_K = T_K;
-  if (p.is_gas) {
-    point.translation = p.options.standard_state == StandardState::molar
-                            ? translation_terms_concentration(p.rotor.mass_amu, T_K, 1000.0)
-                            : translation_terms(p.rotor.mass_amu, T_K, p.options.pressure_Pa);
-    point.rotation = rigid_rotor_terms(p.rotor.rotational_temperatures_K, p.species.symmetry_number, T_K);
+// The species' temperature-independent parts, fixed once per evaluation run: the
+// translation and rotation constants, the vibrations' characteristic temperatures and a
+// single-level electronic term. Per temperature that leaves one ln T, one exp per mode and
+// one log for all vibrations (plus the electronic levels and the hindered rotors).
+class Evaluator {
+ public:
+  explicit Evaluator(const PreparedSpecies& p) : p_(p) {
+    if (p.is_gas) {
+      translation_ = p.options.standard_state == StandardState::molar
+                         ? translation_law_concentration(p.rotor.mass_amu, 1000.0)
+                         : translation_law(p.rotor.mass_amu, p.options.pressure_Pa);
+      rotation_ = rigid_rotor_law(p.rotor.rotational_temperatures_K, p.species.symmetry_number);
+    }
+    theta_K_.reserve(p.vibrations_cm1.size());
+    for (double v : p.vibrations_cm1) theta_K_.push_back(characteristic_temperature_K(v));
+    const auto& levels = p.species.electronic_levels;
+    single_level_ = levels.size() <= 1;
+    if (single_level_) electronic_ = electronic_terms(levels, 1.0);  // ln g, the same at every T
   }
-  for (double v : p.vibrations_cm1) point.vibration += harmonic_oscillator_terms(v, T_K);
-  // The one hook of the low-frequency module: its correction to the harmonic sum.
-  if (!p.vibration_adjustment.modes.empty())
-    point.vibration += vibration_adjustment_terms(p.vibration_adjustment, T_K);
-  point.electronic = electronic_terms(p.species.electronic_levels, T_K);
-  for (const HinderedRotorModel& r : p.hindered_rotors)
-    point.internal_rotation += hindered_rotor_terms(r.levels, r.input.symmetry, T_K);
 
-  MotionTerms total = point.translation;
-  total += point.internal_rotation;
-  total += point.rotation;
-  total += point.vibration;
-  total += point.electronic;
-  const double R = c::gas_constant_J_per_mol_K;
-  point.Cv_J_per_mol_K = R * total.Cv_over_R;
-  point.Cp_J_per_mol_K = R * total.Cp_over_R;
-  point.S_J_per_mol_K = R * total.S_over_R;
-  point.H_minus_H0_J_per_mol = R * T_K * total.H_over_RT;
-  return point;
-}
+  // Thermal functions at T without the H(298.15) reference.
+  ThermoPoint terms(double T_K) const {
+    ThermoPoint point;
+    point.T_K = T_K;
+    if (p_.is_gas) {
+      const double ln_T = std::log(T_K);
+      point.translation = translation_.at(ln_T);
+      point.rotation = rotation_.at(ln_T);
+    }
+    point.vibration = harmonic_oscillators_terms(theta_K_, T_K);
+    // The one hook of the low-frequency module: its correction to the harmonic sum.
+    if (!p_.vibration_adjustment.modes.empty())
+      point.vibration += vibration_adjustment_terms(p_.vibration_adjustment, T_K);
+    point.electronic = single_level_ ? electronic_ : electronic_terms(p_.species.electronic_levels, T_K);
+    for (const HinderedRotorModel& r : p_.hindered_rotors)
+      point.internal_rotation += hindered_rotor_terms(r.levels, r.input.symmetry, T_K);
+
+    MotionTerms total = point.translation;
+    total += point.internal_rotation;
+    total += point.rotation;
+    total += point.vibration;
+    total += point.electronic;
+    const double R = c::gas_constant_J_per_mol_K;
+    point.Cv_J_per_mol_K = R * total.Cv_over_R;
+    point.Cp_J_per_mol_K = R * total.Cp_over_R;
+    point.S_J_per_mol_K = R * total.S_over_R;
+    point.H_minus_H0_J_per_mol = R * T_K * total.H_over_RT;
+    return point;
+  }
+
+  ThermoPoint point(double T_K) const {
+    if (!(T_K > 0.0) || !std::isfinite(T_K))
+      fail({}, fmt::format("temperature must be positive, got {} K", T_K));
+    ThermoPoint point = terms(T_K);
+    point.H_minus_H298_J_per_mol = point.H_minus_H0_J_per_mol - p_.H298_minus_H0_J_per_mol;
+    point.G_minus_H298_J_per_mol = point.H_minus_H298_J_per_mol - T_K * point.S_J_per_mol_K;
+    point.gibbs_function_J_per_mol_K = -point.G_minus_H298_J_per_mol / T_K;
+    return point;
+  }
+
+ private:
+  const PreparedSpecies& p_;
+  LogLinearTerms translation_, rotation_;
+  std::vector<double> theta_K_;
+  bool single_level_ = true;
+  MotionTerms electronic_;
+};
 
 }  // namespace
 
@@ -236,6 +279,8 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
     p.warnings.push_back(message);
   }
   apply_imaginary_policy(p, scaled);
+  if (species.tunnelling && !p.tunnelling)
+    p.warnings.push_back("'tunnelling' barriers ignored: the species is not treated as a transition state");
 
   replace_torsions(p);
   plan_low_frequency(p);
@@ -246,7 +291,7 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
   for (const HinderedRotorModel& r : p.hindered_rotors)
     p.zero_point_energy_J_per_mol += r.levels.zero_point_energy_J_per_mol;
   if (!p.is_gas) p.notes.push_back("adsorbate: all 3N motions treated as harmonic vibrations");
-  const ThermoPoint at298 = evaluate_terms(p, c::reference_temperature_K);
+  const ThermoPoint at298 = Evaluator(p).terms(c::reference_temperature_K);
   p.H298_minus_H0_J_per_mol = at298.H_minus_H0_J_per_mol;
   for (const SoftMode& m : soft_harmonic_modes(p.vibration_adjustment, p.vibrations_cm1))
     p.warnings.push_back(soft_mode_warning(m, p.vibration_adjustment.options.soft_mode_warning_below_cm1,
@@ -254,21 +299,14 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
   return p;
 }
 
-ThermoPoint evaluate(const PreparedSpecies& prepared, double T_K) {
-  if (!(T_K > 0.0) || !std::isfinite(T_K))
-    fail({}, fmt::format("temperature must be positive, got {} K", T_K));
-  ThermoPoint point = evaluate_terms(prepared, T_K);
-  point.H_minus_H298_J_per_mol = point.H_minus_H0_J_per_mol - prepared.H298_minus_H0_J_per_mol;
-  point.G_minus_H298_J_per_mol = point.H_minus_H298_J_per_mol - T_K * point.S_J_per_mol_K;
-  point.gibbs_function_J_per_mol_K = -point.G_minus_H298_J_per_mol / T_K;
-  return point;
-}
+ThermoPoint evaluate(const PreparedSpecies& prepared, double T_K) { return Evaluator(prepared).point(T_K); }
 
 std::vector<ThermoPoint> tabulate(const PreparedSpecies& prepared,
                                   const std::vector<double>& temperatures_K) {
+  const Evaluator evaluator(prepared);
   std::vector<ThermoPoint> rows;
   rows.reserve(temperatures_K.size());
-  for (double T : temperatures_K) rows.push_back(evaluate(prepared, T));
+  for (double T : temperatures_K) rows.push_back(evaluator.point(T));
   return rows;
 }
 

@@ -2,6 +2,7 @@
 
 #include <fmt/format.h>
 
+#include <algorithm>
 #include <array>
 #include <nlohmann/json.hpp>
 
@@ -52,8 +53,14 @@ std::string table_text(const std::vector<SpeciesTable>& tables, const TableWrite
         units += fmt::format(" {:>8} {:>8}", "J/mol/K", "J/mol/K");
       }
     }
+    const bool kappa = table.tunnelling.size() == table.rows.size() && !table.rows.empty();
+    if (kappa) {
+      head += fmt::format(" {:>11} {:>11}", "kappa.Wig", "kappa.Eck");
+      units += fmt::format(" {:>11} {:>11}", "1", "1");
+    }
     out += head + '\n' + units + '\n';
-    for (const auto& r : table.rows) {
+    for (std::size_t i = 0; i < table.rows.size(); ++i) {
+      const auto& r = table.rows[i];
       std::string line = fmt::format("{:>9.2f} {:>9.3f}", r.T_K, r.Cp_J_per_mol_K);
       if (model) line += fmt::format(" {:>9.3f}", r.Cv_J_per_mol_K);
       line += fmt::format(" {:>9.3f} {:>10.3f}", r.S_J_per_mol_K, r.H_minus_H298_J_per_mol / 1e3);
@@ -63,6 +70,10 @@ std::string table_text(const std::vector<SpeciesTable>& tables, const TableWrite
       if (breakdown)
         for (const auto& m : motions)
           line += fmt::format(" {:>8.3f} {:>8.3f}", (r.*m.terms).Cp_over_R * R, (r.*m.terms).S_over_R * R);
+      if (kappa) {
+        const TunnellingPoint& k = table.tunnelling[i];
+        line += fmt::format(" {:>11.5g} {:>11}", k.wigner, k.eckart ? fmt::format("{:.5g}", *k.eckart) : "-");
+      }
       out += line + '\n';
     }
   }
@@ -77,6 +88,9 @@ std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteO
   if (breakdown)
     for (const auto& m : motions)
       out += fmt::format(",Cp_{0}_J_per_mol_K,S_{0}_J_per_mol_K,H_minus_H0_{0}_kJ_per_mol", m.name);
+  const bool kappa =
+      std::any_of(tables.begin(), tables.end(), [](const SpeciesTable& t) { return !t.tunnelling.empty(); });
+  if (kappa) out += ",kappa_wigner,kappa_eckart";
   out += '\n';
   for (const auto& table : tables) {
     // Names are quoted when they hold a comma or quote (RFC 4180).
@@ -86,7 +100,8 @@ std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteO
       for (char ch : name) quoted += ch == '"' ? std::string("\"\"") : std::string(1, ch);
       name = quoted + "\"";
     }
-    for (const auto& r : table.rows) {
+    for (std::size_t i = 0; i < table.rows.size(); ++i) {
+      const auto& r = table.rows[i];
       const bool model = table.has_model_columns;
       out += fmt::format("{},{},{:.6f},{},{:.6f},{:.6f},{},{:.6f},{:.6f}", name, r.T_K, r.Cp_J_per_mol_K,
                          model ? fmt::format("{:.6f}", r.Cv_J_per_mol_K) : "", r.S_J_per_mol_K,
@@ -100,6 +115,11 @@ std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteO
                                      t.H_over_RT * R * r.T_K / 1e3)
                        : std::string(",,,");
         }
+      if (kappa) {
+        const TunnellingPoint* k = i < table.tunnelling.size() ? &table.tunnelling[i] : nullptr;
+        out += k ? fmt::format(",{:.8g},{}", k->wigner, k->eckart ? fmt::format("{:.8g}", *k->eckart) : "")
+                 : std::string(",,");
+      }
       out += '\n';
     }
   }
@@ -120,8 +140,10 @@ std::string table_json(const std::vector<SpeciesTable>& tables, const TableWrite
   for (const auto& table : tables) {
     nlohmann::ordered_json entry;
     entry["name"] = table.name;
+    if (!table.notes.empty()) entry["notes"] = table.notes;
     entry["rows"] = nlohmann::ordered_json::array();
-    for (const auto& r : table.rows) {
+    for (std::size_t i = 0; i < table.rows.size(); ++i) {
+      const auto& r = table.rows[i];
       nlohmann::ordered_json row;
       row["T"] = r.T_K;
       row["Cp"] = r.Cp_J_per_mol_K;
@@ -140,6 +162,10 @@ std::string table_json(const std::vector<SpeciesTable>& tables, const TableWrite
                                     {"H_minus_H0", t.H_over_RT * R * r.T_K / 1e3},
                                     {"ln_q", t.ln_q}};
         }
+      }
+      if (i < table.tunnelling.size()) {
+        row["kappa_wigner"] = table.tunnelling[i].wigner;
+        if (table.tunnelling[i].eckart) row["kappa_eckart"] = *table.tunnelling[i].eckart;
       }
       entry["rows"].push_back(row);
     }

@@ -3,6 +3,7 @@
 #include <doctest/doctest.h>
 
 #include <cmath>
+#include <vector>
 
 #include "vibtherm/constants.hpp"
 
@@ -78,4 +79,26 @@ TEST_CASE("rigid rotor and electronic levels") {
   // Two levels at T → ∞: S → R ln(g0 + g1) (Boltzmann limit).
   const std::vector<ElectronicLevel> pair{{0.0, 2}, {100.0, 2}};
   CHECK(electronic_terms(pair, 1e7).S_over_R == doctest::Approx(std::log(4.0)).epsilon(1e-4));
+}
+
+TEST_CASE("a set of oscillators: one log for all, no underflow of the product") {
+  // Σ ln(1 − e^{−x_i}) over 5000 modes at x = 1e-5 is about −57,600: the product itself
+  // (1e-25000) is far below the smallest double, the rescaled one is not.
+  std::vector<double> theta(5000, 1.0);
+  double ln_q = 0.0, U = 0.0;
+  for (double t : theta) {
+    ln_q += harmonic_oscillator_terms(t / constants::second_radiation_cm_K, 1e5).ln_q;
+    U += harmonic_oscillator_terms(t / constants::second_radiation_cm_K, 1e5).U_over_RT;
+  }
+  const auto all = harmonic_oscillators_terms(theta, 1e5);
+  CHECK(std::isfinite(all.ln_q));
+  CHECK(all.ln_q == doctest::Approx(ln_q).epsilon(1e-12));
+  CHECK(all.U_over_RT == doctest::Approx(U).epsilon(1e-12));
+  // Nearly frozen modes: ln q ≈ Σ e^{−x} ~ 1e-9 keeps its relative digits (log1p path).
+  const std::vector<double> cold{4000.0, 4200.0, 4500.0};
+  double ln_cold = 0.0;
+  for (double t : cold)
+    ln_cold += harmonic_oscillator_terms(t / constants::second_radiation_cm_K, 200.0).ln_q;
+  CHECK(harmonic_oscillators_terms(cold, 200.0).ln_q == doctest::Approx(ln_cold).epsilon(1e-12));
+  CHECK(harmonic_oscillators_terms({}, 300.0).ln_q == 0.0);
 }

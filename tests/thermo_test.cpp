@@ -151,3 +151,65 @@ TEST_CASE("a Hessian gives the frequencies once the rotor type is known") {
   // Cp at 1000 K rises with the softer modes (more of each is active).
   CHECK(evaluate(d2o, 1000.0).Cp_J_per_mol_K > evaluate(h2o, 1000.0).Cp_J_per_mol_K);
 }
+
+namespace {
+
+// The straightforward sum over motions (partition.hpp's one-motion functions, one exp, one
+// expm1 and one log per mode and temperature), the reference for the engine's hoisted loop.
+double straightforward(const PreparedSpecies& p, double T, int which) {
+  MotionTerms total;
+  if (p.is_gas) {
+    total += p.options.standard_state == StandardState::molar
+                 ? translation_terms_concentration(p.rotor.mass_amu, T, 1000.0)
+                 : translation_terms(p.rotor.mass_amu, T, p.options.pressure_Pa);
+    total += rigid_rotor_terms(p.rotor.rotational_temperatures_K, p.species.symmetry_number, T);
+  }
+  for (double v : p.vibrations_cm1) total += harmonic_oscillator_terms(v, T);
+  total += electronic_terms(p.species.electronic_levels, T);
+  switch (which) {
+    case 0:
+      return R * total.Cp_over_R;
+    case 1:
+      return R * total.S_over_R;
+    default:
+      return R * T * total.H_over_RT;
+  }
+}
+
+}  // namespace
+
+TEST_CASE("the engine's hoisted loop equals the per-mode formulas to 1e-12") {
+  // 60 modes log-spaced over 12..3900 cm^-1 on a nonlinear 22-atom frame, two electronic
+  // levels; water (nonlinear), CO2 (linear), the molar standard state and an adsorbate.
+  Species big = test::water();
+  big.name = "big";
+  big.atoms.clear();
+  for (int i = 0; i < 22; ++i)
+    big.atoms.push_back(test::atom("C", test::mass_C12, 1.3 * i, 0.7 * (i % 3), 0.4 * (i % 5)));
+  big.frequencies_cm1.clear();
+  for (int i = 0; i < 60; ++i) big.frequencies_cm1.push_back(12.0 * std::pow(325.0, i / 59.0));
+  big.electronic_levels = {{0.0, 2}, {139.7, 2}};
+  std::vector<PreparedSpecies> cases;
+  ModelOptions free_count;
+  free_count.mode_count_mismatch_is_warning = true;
+  cases.push_back(prepare_species(big, free_count));
+  cases.push_back(prepare_species(test::water()));
+  cases.push_back(prepare_species(test::carbon_dioxide()));
+  ModelOptions molar;
+  molar.standard_state = StandardState::molar;
+  cases.push_back(prepare_species(test::water(), molar));
+  Species surface = big;
+  surface.phase = Phase::adsorbate;
+  cases.push_back(prepare_species(surface, free_count));
+  const std::vector<double> temps{1.0, 5.0, 50.0, 298.15, 1000.0, 6000.0, 1e5};
+  for (const PreparedSpecies& p : cases) {
+    const auto rows = tabulate(p, temps);
+    for (std::size_t i = 0; i < temps.size(); ++i) {
+      CAPTURE(p.species.name);
+      CAPTURE(temps[i]);
+      CHECK(rows[i].Cp_J_per_mol_K == doctest::Approx(straightforward(p, temps[i], 0)).epsilon(1e-12));
+      CHECK(rows[i].S_J_per_mol_K == doctest::Approx(straightforward(p, temps[i], 1)).epsilon(1e-12));
+      CHECK(rows[i].H_minus_H0_J_per_mol == doctest::Approx(straightforward(p, temps[i], 2)).epsilon(1e-12));
+    }
+  }
+}

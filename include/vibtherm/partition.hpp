@@ -36,6 +36,26 @@ MotionTerms rigid_rotor_terms(std::span<const double> rotational_temperatures_K,
 // with x = θ/T, ln q = −ln(1 − e^{−x}), Cv/R = x² eˣ/(eˣ − 1)².
 MotionTerms harmonic_oscillator_terms(double wavenumber_cm1, double T_K);
 
+// A set of harmonic oscillators with characteristic temperatures θ_i (K): the same terms as
+// the sum of harmonic_oscillator_terms over the set, with one exp (expm1 below x = 0.5)
+// per mode and one log for the whole set, ln q = −ln Π(1 − e^{−x_i}); the product is kept
+// as mantissa and binary exponent so that it cannot underflow, and near 1 it is carried as
+// 1 − Π so that log1p keeps its relative accuracy.
+MotionTerms harmonic_oscillators_terms(std::span<const double> theta_K, double T_K);
+
+// Translation and classical rigid rotation have ln q = ln_q_at_1K + power · ln T and
+// temperature-independent U, H, Cv and Cp: a species fixes the constants once, and an
+// evaluation over many temperatures costs one ln T shared by both.
+struct LogLinearTerms {
+  double ln_q_at_1K = 0.0;
+  double power = 0.0;  // d ln q / d ln T
+  MotionTerms fixed;   // U, H, Cv, Cp; ln q and S are filled by at()
+  MotionTerms at(double ln_T) const;
+};
+LogLinearTerms translation_law(double mass_amu, double pressure_Pa);
+LogLinearTerms translation_law_concentration(double mass_amu, double concentration_mol_per_m3);
+LogLinearTerms rigid_rotor_law(std::span<const double> rotational_temperatures_K, int symmetry_number);
+
 // Characteristic temperature θ = h c ν̃ / k of a wavenumber in cm^-1.
 double characteristic_temperature_K(double wavenumber_cm1);
 

@@ -58,6 +58,13 @@ struct HinderedRotor {
   double replaces_cm1 = 0.0;                // wavenumber of the torsional mode replaced
 };
 
+// Barrier heights of a transition state for the Eckart tunnelling correction (tunnelling.hpp).
+struct TunnellingBarriers {
+  SourceLocation where;
+  double forward_J_per_mol = 0.0;  // from the reactant side
+  double reverse_J_per_mol = 0.0;  // from the product side
+};
+
 // Alternative to atoms: the rigid-rotor data given directly.
 struct RigidRotorData {
   double mass_amu = 0.0;
@@ -84,6 +91,7 @@ struct Species {
   std::vector<HinderedRotor> hindered_rotors;
   std::optional<LowFrequencyMethod> low_frequency;  // input key; --low-freq overrides
   ScaleFactors scale;                               // input key `scale`
+  std::optional<TunnellingBarriers> tunnelling;     // input key `tunnelling` (transition states)
 };
 
 }  // namespace vibtherm

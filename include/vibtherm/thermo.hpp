@@ -14,6 +14,7 @@
 #include "vibtherm/partition.hpp"
 #include "vibtherm/scale_factors.hpp"
 #include "vibtherm/species.hpp"
+#include "vibtherm/tunnelling.hpp"
 
 namespace vibtherm {
 
@@ -40,8 +41,9 @@ struct PreparedSpecies {
   std::vector<double> vibrations_cm1;  // real wavenumbers used, scaled, input order,
                                        // without the torsions replaced by hindered rotors
   std::vector<HinderedRotorModel> hindered_rotors;
-  ResolvedScaleFactors scale;                // factors used (vibrations_cm1 carry the entropy one)
-  VibrationAdjustment vibration_adjustment;  // low-frequency treatment and enthalpy scaling
+  ResolvedScaleFactors scale;                           // factors used (vibrations_cm1 carry the entropy one)
+  VibrationAdjustment vibration_adjustment;             // low-frequency treatment and enthalpy scaling
+  std::optional<TransitionStateTunnelling> tunnelling;  // transition states: κ(T) reported beside
   std::vector<double> used_frequencies_cm1;  // as reported: includes a dropped reaction coordinate (negative)
   double zero_point_energy_J_per_mol = 0.0;  // harmonic ½hcν̃ sum plus the rotors' own ZPE
   double H298_minus_H0_J_per_mol = 0.0;      // thermal enthalpy at 298.15 K, the table's reference

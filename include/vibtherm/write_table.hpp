@@ -6,6 +6,7 @@
 #include <vector>
 
 #include "vibtherm/thermo.hpp"
+#include "vibtherm/tunnelling.hpp"
 
 namespace vibtherm {
 
@@ -14,6 +15,9 @@ struct SpeciesTable {
   std::string caption;  // one line shown above the text table (model summary)
   std::vector<ThermoPoint> rows;
   bool has_model_columns = true;  // Cv, H−H0 and the per-motion breakdown are known
+  std::vector<TunnellingPoint> tunnelling;
+  std::vector<std::string> notes;  // model notes (JSON "notes"): scale factors, treatments  // transition
+                                   // states: κ(T) per row, else empty
 };
 
 struct TableWriteOptions {

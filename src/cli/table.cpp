@@ -10,6 +10,18 @@ namespace vibtherm::cli {
 
 namespace {
 
+// The model choices that differ from the plain harmonic, unscaled model, as a second line.
+std::string model_line(const PreparedSpecies& p) {
+  std::string line;
+  if (p.vibration_adjustment.options.method != LowFrequencyMethod::harmonic)
+    line += fmt::format("low-frequency treatment {}",
+                        low_frequency_method_name(p.vibration_adjustment.options.method));
+  if (!(p.scale.zpe == 1.0 && p.scale.enthalpy == 1.0 && p.scale.entropy == 1.0))
+    line += fmt::format("{}frequency scale factors: ZPE {:g}, enthalpy {:g}, entropy/Cp {:g}",
+                        line.empty() ? "" : "; ", p.scale.zpe, p.scale.enthalpy, p.scale.entropy);
+  return line.empty() ? "" : "\n" + line;
+}
+
 std::string caption(const PreparedSpecies& p) {
   std::string standard = fmt::format("{:g} Pa", p.options.pressure_Pa);
   if (p.options.standard_state == StandardState::molar)
@@ -20,10 +32,12 @@ std::string caption(const PreparedSpecies& p) {
     standard = "1 atm";
   if (!p.is_gas)
     return fmt::format("adsorbate, {} harmonic modes, ZPE {:.3f} kJ/mol", p.vibrations_cm1.size(),
-                       p.zero_point_energy_J_per_mol / 1e3);
+                       p.zero_point_energy_J_per_mol / 1e3) +
+           model_line(p);
   return fmt::format("{} rotor, symmetry number {}, {} vibrations, standard state {}, ZPE {:.3f} kJ/mol",
                      rotor_type_name(p.rotor.type), p.species.symmetry_number, p.vibrations_cm1.size(),
-                     standard, p.zero_point_energy_J_per_mol / 1e3);
+                     standard, p.zero_point_energy_J_per_mol / 1e3) +
+         model_line(p);
 }
 
 }  // namespace
@@ -40,7 +54,9 @@ void setup_table(CLI::App& sub) {
     log_species_diagnostics(batch);
     std::vector<SpeciesTable> tables;
     for (const auto& p : batch.species)
-      tables.push_back({p.species.name, caption(p), tabulate(p, temps), true});
+      tables.push_back(
+          {p.species.name, caption(p), tabulate(p, temps), true,
+           p.tunnelling ? tunnelling_table(*p.tunnelling, temps) : std::vector<TunnellingPoint>{}, p.notes});
     const TableWriteOptions write{*breakdown};
     const std::string& f = options->format;
     write_output(options->output, f == "json"  ? table_json(tables, write)

@@ -1,0 +1,203 @@
+// The species-independent half of the constrained least squares of fit_nasa.cpp (method
+// and reasons there): the Cp basis on the grid and the QR factorisation of the
+// constraints, whose nullspace basis N turns the fit into an unconstrained one.
+#include "vibtherm/fit_plan.hpp"
+
+#include <fmt/format.h>
+
+#include <Eigen/Dense>
+#include <algorithm>
+#include <cmath>
+
+#include "fit_terms.hpp"
+#include "vibtherm/constants.hpp"
+#include "vibtherm/error.hpp"
+
+namespace vibtherm {
+
+using namespace fit_detail;
+
+struct FitPlan::System {
+  std::vector<double> bp;
+  int m = 0, per = 0, nr = 0, n = 0, p = 0;
+  std::vector<std::pair<int, int>> rows;  // (sample, range), one row per range holding the sample
+  Eigen::MatrixXd basis;                  // unweighted Cp basis, rows × n
+  Eigen::MatrixXd Q1, R1, N;              // Cᵀ P = Q [R1; 0], Q = [Q1 N]
+  Eigen::PermutationMatrix<Eigen::Dynamic, Eigen::Dynamic> P;
+};
+
+namespace {
+
+std::unique_ptr<const FitPlan::System> build_system(const std::vector<double>& grid,
+                                                    const std::vector<double>& bp, NasaForm form,
+                                                    bool slope_continuous) {
+  auto s = std::make_unique<FitPlan::System>();
+  s->bp = bp;
+  const std::vector<int> ex = exponents_of(form);
+  const int m = s->m = static_cast<int>(ex.size());
+  const int per = s->per = m + 2;  // α_0..α_{m-1}, β_H, β_S
+  const int nr = s->nr = static_cast<int>(bp.size()) - 1;
+  const int n = s->n = nr * per;
+
+  for (int i = 0; i < static_cast<int>(grid.size()); ++i)
+    for (int r = 0; r < nr; ++r)
+      if (in_range(bp, r, grid[i])) s->rows.emplace_back(i, r);
+  for (int r = 0; r < nr; ++r) {
+    const auto count =
+        std::count_if(s->rows.begin(), s->rows.end(), [r](const auto& row) { return row.second == r; });
+    if (count < m)
+      fail({}, fmt::format("fit range {:g}-{:g} K holds {} grid points, fewer than its {} coefficients: "
+                           "widen the range or refine the grid",
+                           bp[r], bp[r + 1], count, m));
+  }
+  s->basis = Eigen::MatrixXd::Zero(static_cast<Eigen::Index>(s->rows.size()), n);
+  for (std::size_t j = 0; j < s->rows.size(); ++j) {
+    const int r = s->rows[j].second;
+    const double tau = grid[s->rows[j].first] / kScale_K;
+    for (int k = 0; k < m; ++k) s->basis(j, r * per + k) = cp_term(ex[k], tau);
+  }
+
+  // Equality constraints: at every joint Cp (and dCp/dT), H and S equal on both sides;
+  // at 298.15 K, H and S take the species' values (the right-hand side, per species).
+  std::vector<Eigen::VectorXd> crow;
+  auto joint = [&](int r, double tau, auto basis, int beta) {
+    Eigen::VectorXd c = Eigen::VectorXd::Zero(n);
+    for (int k = 0; k < m; ++k) {
+      c(r * per + k) = basis(ex[k], tau);
+      c((r + 1) * per + k) = -basis(ex[k], tau);
+    }
+    if (beta >= 0) {
+      c(r * per + m + beta) = 1.0;
+      c((r + 1) * per + m + beta) = -1.0;
+    }
+    crow.push_back(c);
+  };
+  for (int r = 0; r + 1 < nr; ++r) {
+    const double tau = bp[r + 1] / kScale_K;
+    joint(r, tau, cp_term, -1);
+    if (slope_continuous) joint(r, tau, dcp_term, -1);
+    joint(r, tau, h_term, 0);
+    joint(r, tau, s_term, 1);
+  }
+  {
+    const double T0 = constants::reference_temperature_K;
+    const int r = range_index_of(bp, T0);
+    const double tau = T0 / kScale_K;
+    Eigen::VectorXd ch = Eigen::VectorXd::Zero(n), cs = Eigen::VectorXd::Zero(n);
+    for (int k = 0; k < m; ++k) {
+      ch(r * per + k) = h_term(ex[k], tau);
+      cs(r * per + k) = s_term(ex[k], tau);
+    }
+    ch(r * per + m) = 1.0;
+    cs(r * per + m + 1) = 1.0;
+    crow.push_back(ch);
+    crow.push_back(cs);
+  }
+  const int p = s->p = static_cast<int>(crow.size());
+  Eigen::MatrixXd Ct(n, p);
+  for (int i = 0; i < p; ++i) Ct.col(i) = crow[i];
+
+  // Nullspace method (Golub & Van Loan, §6.2): Cᵀ P = Q [R1; 0]; x = Q1 R1⁻ᵀ Pᵀ d + N z.
+  Eigen::ColPivHouseholderQR<Eigen::MatrixXd> cqr(Ct);
+  if (cqr.rank() < p) fail({}, "NASA fit: the continuity and 298.15 K constraints are linearly dependent");
+  const Eigen::MatrixXd Q = cqr.householderQ();
+  s->R1 = cqr.matrixR().topLeftCorner(p, p).triangularView<Eigen::Upper>();
+  s->P = cqr.colsPermutation();
+  s->Q1 = Q.leftCols(p);
+  s->N = Q.rightCols(n - p);
+  return s;
+}
+
+std::vector<double> grid_of(const FitOptions& options) {
+  const auto& bp = options.range.breakpoints_K;
+  const double T_lo = bp.front(), T_hi = bp.back();
+  std::vector<double> grid;
+  for (double t = T_lo; t < T_hi; t += options.grid_step_K) grid.push_back(t);
+  for (double t : bp)
+    if (!std::isnan(t)) grid.push_back(t);
+  std::sort(grid.begin(), grid.end());
+  grid.erase(std::unique(grid.begin(), grid.end(), [](double a, double b) { return std::abs(a - b) < 1e-9; }),
+             grid.end());
+  return grid;
+}
+
+}  // namespace
+
+FitPlan::FitPlan(const FitOptions& options) : FitPlan(options, grid_of(options)) {}
+
+FitPlan::FitPlan(const FitOptions& options, std::vector<double> grid_K)
+    : options_(options), grid_K_(std::move(grid_K)) {
+  std::vector<double> bp = options.range.breakpoints_K;
+  const int ai = options.range.auto_index;
+  if (ai < 0) {
+    candidates_.push_back(bp);
+  } else {
+    // The `auto` breakpoint's candidates, every auto_step_K with margins to its neighbours.
+    const double lo = bp[ai - 1] + options.auto_margin_K;
+    const double hi = bp[ai + 1] - options.auto_margin_K;
+    for (double t = std::ceil(lo / options.auto_step_K) * options.auto_step_K; t <= hi + 1e-9;
+         t += options.auto_step_K) {
+      bp[ai] = t;
+      candidates_.push_back(bp);
+    }
+    if (candidates_.empty())
+      fail({}, fmt::format("--range: no 'auto' candidate between {} and {} K (need {} K margins)", bp[ai - 1],
+                           bp[ai + 1], options.auto_margin_K));
+  }
+  for (const auto& c : candidates_)
+    systems_.push_back(build_system(grid_K_, c, options.form, options.Cp_slope_continuous));
+}
+
+FitPlan::~FitPlan() = default;
+FitPlan::FitPlan(FitPlan&&) noexcept = default;
+FitPlan& FitPlan::operator=(FitPlan&&) noexcept = default;
+
+std::vector<Nasa9Range> FitPlan::solve(std::size_t candidate, const FitInput& in) const {
+  const System& s = *systems_[candidate];
+  if (in.samples.size() != grid_K_.size())
+    fail({}, fmt::format("NASA fit: {} samples for a plan of {} grid temperatures", in.samples.size(),
+                         grid_K_.size()));
+  const std::vector<int> ex = exponents_of(options_.form);
+  const int m = s.m, per = s.per;
+  constexpr double kWeightFloor_Cp_over_R = 0.5;  // see fit_nasa.cpp
+  Eigen::MatrixXd A(s.basis.rows(), s.n);
+  Eigen::VectorXd y(s.basis.rows());
+  for (std::size_t j = 0; j < s.rows.size(); ++j) {
+    const FitSample& sample = in.samples[s.rows[j].first];
+    const double w = 1.0 / std::max(sample.Cp_over_R, kWeightFloor_Cp_over_R);
+    A.row(static_cast<Eigen::Index>(j)) = w * s.basis.row(static_cast<Eigen::Index>(j));
+    y(static_cast<Eigen::Index>(j)) = w * sample.Cp_over_R;
+  }
+  Eigen::VectorXd d = Eigen::VectorXd::Zero(s.p);
+  d(s.p - 2) = in.H298_over_R / kScale_K;
+  d(s.p - 1) = in.S298_over_R;
+  const Eigen::VectorXd Ptd = s.P.transpose() * d;
+  const Eigen::VectorXd u = s.R1.transpose().triangularView<Eigen::Lower>().solve(Ptd);
+  const Eigen::VectorXd x0 = s.Q1 * u;
+  Eigen::ColPivHouseholderQR<Eigen::MatrixXd> lsq(A * s.N);
+  const Eigen::VectorXd z = lsq.solve(y - A * x0);
+  const Eigen::VectorXd x = x0 + s.N * z;
+
+  // Back to kelvin: a_k = α_k / 1000^e_k; the ln T terms shift the constants
+  // (H/R: e = −1 term α s ln τ = a ln T − a ln s; S/R: e = 0 term likewise).
+  std::vector<Nasa9Range> out(s.nr);
+  const double ln_s = std::log(kScale_K);
+  for (int r = 0; r < s.nr; ++r) {
+    Nasa9Range& range = out[r];
+    range.T_low_K = s.bp[r];
+    range.T_high_K = s.bp[r + 1];
+    double bH = kScale_K * x(r * per + m);
+    double bS = x(r * per + m + 1);
+    for (int k = 0; k < m; ++k) {
+      const double alpha = x(r * per + k);
+      range.a[ex[k] + 2] = alpha / std::pow(kScale_K, ex[k]);
+      if (ex[k] == -1) bH -= kScale_K * alpha * ln_s;
+      if (ex[k] == 0) bS -= alpha * ln_s;
+    }
+    range.b1 = bH;
+    range.b2 = bS;
+  }
+  return out;
+}
+
+}  // namespace vibtherm
