@@ -29,13 +29,13 @@ constexpr std::array<const char*, 5> motion_tags{"trans", "rot", "vib", "hrot", 
 
 }  // namespace
 
-std::string table_text(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options) {
+namespace {
+
+std::string text_piece(const SpeciesTable& table, const TableWriteOptions& options) {
   std::string out;
-  for (size_t k = 0; k < tables.size(); ++k) {
-    const auto& table = tables[k];
+  {
     const bool model = table.has_model_columns;
     const bool breakdown = options.breakdown && model;
-    if (k > 0) out += '\n';
     out += fmt::format("== {} ==\n", table.name);
     if (!table.caption.empty()) out += table.caption + '\n';
     // Headings and a units line; widths are fixed so columns line up across species.
@@ -80,7 +80,7 @@ std::string table_text(const std::vector<SpeciesTable>& tables, const TableWrite
   return out;
 }
 
-std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options) {
+std::string csv_header(const TableWriteOptions& options) {
   const bool breakdown = options.breakdown;
   std::string out =
       "species,T_K,Cp_J_per_mol_K,Cv_J_per_mol_K,S_J_per_mol_K,H_minus_H298_kJ_per_mol,H_minus_H0_kJ_per_mol,"
@@ -88,11 +88,16 @@ std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteO
   if (breakdown)
     for (const auto& m : motions)
       out += fmt::format(",Cp_{0}_J_per_mol_K,S_{0}_J_per_mol_K,H_minus_H0_{0}_kJ_per_mol", m.name);
-  const bool kappa =
-      std::any_of(tables.begin(), tables.end(), [](const SpeciesTable& t) { return !t.tunnelling.empty(); });
-  if (kappa) out += ",kappa_wigner,kappa_eckart";
-  out += '\n';
-  for (const auto& table : tables) {
+  // Tunnelling corrections of transition states; empty for other species (the header comes
+  // before the species are known).
+  out += ",kappa_wigner,kappa_eckart\n";
+  return out;
+}
+
+std::string csv_piece(const SpeciesTable& table, const TableWriteOptions& options) {
+  const bool breakdown = options.breakdown;
+  std::string out;
+  {
     // Names are quoted when they hold a comma or quote (RFC 4180).
     std::string name = table.name;
     if (name.find_first_of(",\"\n") != std::string::npos) {
@@ -115,7 +120,7 @@ std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteO
                                      t.H_over_RT * R * r.T_K / 1e3)
                        : std::string(",,,");
         }
-      if (kappa) {
+      {
         const TunnellingPoint* k = i < table.tunnelling.size() ? &table.tunnelling[i] : nullptr;
         out += k ? fmt::format(",{:.8g},{}", k->wigner, k->eckart ? fmt::format("{:.8g}", *k->eckart) : "")
                  : std::string(",,");
@@ -126,18 +131,34 @@ std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteO
   return out;
 }
 
-std::string table_json(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options) {
-  nlohmann::ordered_json doc;
-  doc["units"] = {{"T", "K"},
-                  {"Cp", "J/(mol K)"},
-                  {"Cv", "J/(mol K)"},
-                  {"S", "J/(mol K)"},
-                  {"H_minus_H298", "kJ/mol"},
-                  {"H_minus_H0", "kJ/mol"},
-                  {"G_minus_H298", "kJ/mol"},
-                  {"minus_G_minus_H298_over_T", "J/(mol K)"}};
-  doc["species"] = nlohmann::ordered_json::array();
-  for (const auto& table : tables) {
+// `value` dumped with an indent of 2, every line after the first shifted by `indent`
+// spaces: the text dump(2) gives it as a member at that depth.
+std::string indented_json(const nlohmann::ordered_json& value, int indent) {
+  std::string text = value.dump(2);
+  const std::string pad(static_cast<std::size_t>(indent), ' ');
+  std::string out;
+  out.reserve(text.size() + text.size() / 8);
+  for (char c : text) {
+    out += c;
+    if (c == '\n') out += pad;  // JSON strings hold no raw line breaks: every one is layout
+  }
+  return out;
+}
+
+std::string json_begin() {
+  nlohmann::ordered_json units = {{"T", "K"},
+                                  {"Cp", "J/(mol K)"},
+                                  {"Cv", "J/(mol K)"},
+                                  {"S", "J/(mol K)"},
+                                  {"H_minus_H298", "kJ/mol"},
+                                  {"H_minus_H0", "kJ/mol"},
+                                  {"G_minus_H298", "kJ/mol"},
+                                  {"minus_G_minus_H298_over_T", "J/(mol K)"}};
+  return "{\n  \"units\": " + indented_json(units, 2) + ",\n  \"species\": [";
+}
+
+std::string json_piece(const SpeciesTable& table, const TableWriteOptions& options) {
+  {
     nlohmann::ordered_json entry;
     entry["name"] = table.name;
     if (!table.notes.empty()) entry["notes"] = table.notes;
@@ -169,9 +190,53 @@ std::string table_json(const std::vector<SpeciesTable>& tables, const TableWrite
       }
       entry["rows"].push_back(row);
     }
-    doc["species"].push_back(entry);
+    return "\n    " + indented_json(entry, 4);
   }
-  return doc.dump(2) + '\n';
+}
+
+}  // namespace
+
+std::string table_begin(TableFormat format, const TableWriteOptions& options) {
+  if (format == TableFormat::csv) return csv_header(options);
+  if (format == TableFormat::json) return json_begin();
+  return "";
+}
+
+std::string table_piece(TableFormat format, const SpeciesTable& table, const TableWriteOptions& options) {
+  if (format == TableFormat::csv) return csv_piece(table, options);
+  if (format == TableFormat::json) return json_piece(table, options);
+  return text_piece(table, options);
+}
+
+std::string table_separator(TableFormat format) {
+  if (format == TableFormat::json) return ",";
+  if (format == TableFormat::text) return "\n";
+  return "";
+}
+
+std::string table_end(TableFormat format, std::size_t count) {
+  if (format != TableFormat::json) return "";
+  return count == 0 ? "]\n}\n" : "\n  ]\n}\n";
+}
+
+std::string write_table(TableFormat format, const std::vector<SpeciesTable>& tables,
+                        const TableWriteOptions& options) {
+  std::string out = table_begin(format, options);
+  for (std::size_t k = 0; k < tables.size(); ++k) {
+    if (k > 0) out += table_separator(format);
+    out += table_piece(format, tables[k], options);
+  }
+  return out + table_end(format, tables.size());
+}
+
+std::string table_text(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options) {
+  return write_table(TableFormat::text, tables, options);
+}
+std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options) {
+  return write_table(TableFormat::csv, tables, options);
+}
+std::string table_json(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options) {
+  return write_table(TableFormat::json, tables, options);
 }
 
 }  // namespace vibtherm

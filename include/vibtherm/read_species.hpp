@@ -2,6 +2,7 @@
 // dispatcher, and the headers of the format readers and of path expansion.
 #pragma once
 
+#include <cstddef>
 #include <string>
 
 #include "vibtherm/read_xyz.hpp"
@@ -11,7 +12,15 @@
 
 namespace vibtherm {
 
-// Reads a file, choosing the reader by extension (.yaml/.yml, .xyz).
-Species read_species_file(const std::string& path);
+// Limits of one species file, beyond which it is refused before or after parsing: its
+// size, its atoms and its frequencies (a 2,000-atom adsorbate has 6,000 modes).
+inline constexpr std::size_t max_species_file_bytes = 32u << 20;  // 32 MiB
+inline constexpr std::size_t max_species_atoms = 2000;
+inline constexpr std::size_t max_species_frequencies = 6000;
+
+// Reads a file, choosing the reader by extension (.yaml/.yml, .xyz). Only regular files
+// are read (not /dev/zero, a FIFO or a directory). When `bytes` is given it receives the
+// file's content, e.g. for a checksum without reading the file again.
+Species read_species_file(const std::string& path, std::string* bytes = nullptr);
 
 }  // namespace vibtherm

@@ -2,6 +2,7 @@
 // with the pinned keys (T, Cp, S, H_minus_H298, ...). Formatting only, no physics.
 #pragma once
 
+#include <cstddef>
 #include <string>
 #include <vector>
 
@@ -27,5 +28,16 @@ struct TableWriteOptions {
 std::string table_text(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options = {});
 std::string table_csv(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options = {});
 std::string table_json(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options = {});
+
+// Streaming form, for batches too large to hold: table_begin, then one table_piece per
+// species with table_separator between two pieces, then table_end(number of pieces). The
+// functions above are exactly that, so both give the same bytes.
+enum class TableFormat { text, csv, json };
+std::string table_begin(TableFormat format, const TableWriteOptions& options = {});
+std::string table_piece(TableFormat format, const SpeciesTable& table, const TableWriteOptions& options = {});
+std::string table_separator(TableFormat format);
+std::string table_end(TableFormat format, std::size_t count);
+std::string write_table(TableFormat format, const std::vector<SpeciesTable>& tables,
+                        const TableWriteOptions& options = {});
 
 }  // namespace vibtherm

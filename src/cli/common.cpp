@@ -2,6 +2,7 @@
 
 #include <fmt/format.h>
 #include <spdlog/spdlog.h>
+#include <sys/stat.h>
 #include <unistd.h>
 
 #include <cstdio>
@@ -62,6 +63,7 @@ void add_common_options(CLI::App& sub, CommonOptions& o, bool with_temps,
                  "treat imaginary wavenumbers smaller than this (cm^-1) as real, with a warning");
   sub.add_flag("--allow-mode-count-mismatch", o.mode_count_warning,
                "warn instead of failing when the number of frequencies is not 3N-6 / 3N-5");
+  add_jobs_option(sub, o.jobs);
 }
 
 ModelOptions model_options(const CommonOptions& o) {
@@ -106,71 +108,169 @@ std::vector<double> temperatures_or(const CommonOptions& o, const std::vector<do
   return o.temps_text.empty() ? fallback : parse_temperatures(o.temps_text);
 }
 
-Batch load_batch(const CommonOptions& o) {
-  const ModelOptions model = model_options(o);
-  Batch batch;
-  const auto paths = expand_species_paths(o.inputs);
-  // Progress only for people: a terminal, a large batch, and not --quiet.
-  const bool progress =
-      ::isatty(STDERR_FILENO) && paths.size() >= 200 && spdlog::get_level() <= spdlog::level::info;
-  for (const auto& path : paths) {
-    if (progress && batch.species.size() % 100 == 0)
-      std::cerr << fmt::format("\rreading species {}/{}", batch.species.size() + batch.failures.size(),
-                               paths.size())
-                << std::flush;
-    try {
-      batch.species.push_back(prepare_species(read_species_file(path), model));
-    } catch (const InputError& e) {
-      if (!o.keep_going) throw;
-      batch.failures.push_back(e.what());
-      std::cerr << e.what() << '\n';
+void add_jobs_option(CLI::App& sub, unsigned& jobs) {
+  sub.add_option("-j,--jobs", jobs, "species processed at once (threads; default: every core)")
+      ->check(CLI::Range(1u, 1024u));
+}
+
+unsigned thread_count(unsigned jobs) { return jobs == 0 ? default_thread_count() : jobs; }
+
+std::vector<std::string> batch_paths(const CommonOptions& o) { return expand_species_paths(o.inputs); }
+
+void emit_log(const std::vector<LogLine>& log) {
+  for (const auto& line : log) spdlog::log(line.level, "{}", line.text);
+}
+
+std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
+                                      const RawProducer& work, std::vector<LogLine>& log) {
+  try {
+    std::string bytes;
+    const PreparedSpecies p = prepare_species(read_species_file(path, &bytes), model);
+    for (const auto& w : p.warnings)
+      log.push_back({spdlog::level::warn, fmt::format("{}: {}", p.species.name, w)});
+    for (const auto& n : p.notes)
+      log.push_back({spdlog::level::info, fmt::format("{}: {}", p.species.name, n)});
+    work(SpeciesInput{path, bytes, p}, log);
+  } catch (const InputError& e) {
+    if (e.where().file.empty()) return InputError({path, 0, 0}, e.message());
+    return e;
+  }
+  return std::nullopt;
+}
+
+int finish_batch(const BatchSummary& batch, OutputSet& outputs) {
+  if (batch.failures.empty()) {
+    outputs.commit();
+    return exit_ok;
+  }
+  spdlog::error("{} species failed:", batch.failures.size());
+  for (const auto& f : batch.failures) spdlog::error("  {}", f);
+  if (batch.done == 0)
+    spdlog::error("no species succeeded: no output written (an existing output file is left as it was)");
+  else
+    outputs.commit();
+  return exit_some_failed;
+}
+
+namespace fs = std::filesystem;
+
+struct OutputSet::Item {
+  std::string path;
+  fs::path target;  // the file finally written (a symbolic link resolved)
+  fs::path temp;
+  std::FILE* file = nullptr;
+  bool is_stdout = false;
+};
+
+OutputSet::OutputSet() = default;
+
+OutputSet::~OutputSet() {
+  for (auto& item : items_) {
+    if (item->file) std::fclose(item->file);
+    if (!item->temp.empty()) {
+      std::error_code ignored;
+      fs::remove(item->temp, ignored);
     }
   }
-  if (progress) std::cerr << "\r\033[K" << std::flush;  // clear the progress line
-  return batch;
+}
+
+std::size_t OutputSet::add(const std::string& path) {
+  auto item = std::make_unique<Item>();
+  item->path = path;
+  if (path == "-") {
+    item->is_stdout = true;
+    item->file = std::tmpfile();
+    if (!item->file) fail({}, "cannot create a temporary file for the standard output");
+  } else {
+    std::error_code ec;
+    fs::path target(path);
+    if (fs::is_symlink(fs::symlink_status(target, ec))) {
+      target = fs::weakly_canonical(target, ec);
+      if (ec) fail({path, 0, 0}, "cannot resolve the symbolic link of the output file");
+    }
+    if (fs::exists(target, ec) && !fs::is_regular_file(target, ec))
+      fail({path, 0, 0}, "output is not a regular file, expected a file path or '-'");
+    const fs::path dir = target.has_parent_path() ? target.parent_path() : fs::path(".");
+    std::string pattern = (dir / ("." + target.filename().string() + ".tmp-XXXXXX")).string();
+    const int fd = ::mkstemp(pattern.data());
+    if (fd < 0)
+      fail({path, 0, 0}, fmt::format("cannot create the output file (directory '{}' missing or not writable)",
+                                     dir.string()));
+    // Keep the mode of a file being replaced; a new one gets 0666 less the umask.
+    struct stat old {};
+    mode_t mode = 0;
+    if (::stat(target.c_str(), &old) == 0) {
+      mode = old.st_mode & 07777;
+    } else {
+      const mode_t mask = ::umask(0);
+      ::umask(mask);
+      mode = 0666 & ~mask;
+    }
+    ::fchmod(fd, mode);
+    item->target = target;
+    item->temp = pattern;
+    item->file = ::fdopen(fd, "wb");
+    if (!item->file) {
+      ::close(fd);
+      fail({path, 0, 0}, "cannot open the output file for writing");
+    }
+  }
+  items_.push_back(std::move(item));
+  return items_.size() - 1;
+}
+
+void OutputSet::write(std::size_t which, std::string_view text) {
+  Item& item = *items_[which];
+  if (std::fwrite(text.data(), 1, text.size(), item.file) != text.size())
+    fail({item.is_stdout ? "" : item.path, 0, 0}, "could not write the output file completely");
+}
+
+void OutputSet::commit() {
+  for (auto& item : items_) {
+    if (std::fflush(item->file) != 0 || std::ferror(item->file))
+      fail({item->is_stdout ? "" : item->path, 0, 0}, "could not write the output file completely");
+  }
+  for (auto& item : items_) {
+    if (item->is_stdout) {
+      std::rewind(item->file);
+      char buffer[1 << 16];
+      std::size_t n = 0;
+      while ((n = std::fread(buffer, 1, sizeof buffer, item->file)) > 0) std::fwrite(buffer, 1, n, stdout);
+      std::fflush(stdout);
+      std::fclose(item->file);
+      item->file = nullptr;
+      continue;
+    }
+    const int closed = std::fclose(item->file);
+    item->file = nullptr;
+    if (closed != 0) fail({item->path, 0, 0}, "could not write the output file completely");
+  }
+  for (auto& item : items_) {
+    if (item->is_stdout) continue;
+    std::error_code ec;
+    fs::rename(item->temp, item->target, ec);
+    if (ec) fail({item->path, 0, 0}, "could not move the finished output into place");
+    item->temp.clear();
+  }
+}
+
+void check_output_is_not_input(const std::string& output, const std::vector<std::string>& inputs,
+                               const std::string& what) {
+  if (output.empty() || output == "-") return;
+  std::error_code ec;
+  if (!fs::exists(output, ec)) return;
+  for (const auto& input : inputs) {
+    std::error_code e2;
+    if (fs::equivalent(output, input, e2))
+      fail({output, 0, 0},
+           fmt::format("{} names the input file '{}', expected a different output file", what, input));
+  }
 }
 
 void write_output(const std::string& path, const std::string& content) {
-  if (path == "-") {
-    std::fwrite(content.data(), 1, content.size(), stdout);
-    std::fflush(stdout);
-    return;
-  }
-  namespace fs = std::filesystem;
-  const fs::path target(path);
-  fs::path temp = target;
-  temp += fmt::format(".tmp-{}", static_cast<long>(::getpid()));
-  {
-    std::ofstream out(temp, std::ios::binary | std::ios::trunc);
-    if (!out) fail({path, 0, 0}, "cannot open the output file for writing");
-    out.write(content.data(), static_cast<std::streamsize>(content.size()));
-    out.close();
-    if (!out) {
-      std::error_code ignored;
-      fs::remove(temp, ignored);
-      fail({path, 0, 0}, "could not write the output file completely");
-    }
-  }
-  std::error_code ec;
-  fs::rename(temp, target, ec);
-  if (ec) {
-    fs::remove(temp, ec);
-    fail({path, 0, 0}, "could not move the finished output into place");
-  }
-}
-
-void log_species_diagnostics(const Batch& batch) {
-  for (const auto& p : batch.species) {
-    for (const auto& w : p.warnings) spdlog::warn("{}: {}", p.species.name, w);
-    for (const auto& n : p.notes) spdlog::info("{}: {}", p.species.name, n);
-  }
-}
-
-int batch_status(const Batch& batch) {
-  if (batch.failures.empty()) return exit_ok;
-  spdlog::error("{} species failed:", batch.failures.size());
-  for (const auto& f : batch.failures) spdlog::error("  {}", f);
-  return exit_some_failed;
+  OutputSet outputs;
+  outputs.write(outputs.add(path), content);
+  outputs.commit();
 }
 
 }  // namespace vibtherm::cli

@@ -2,12 +2,21 @@
 // atomic output, exit codes. No science here.
 #pragma once
 
+#include <spdlog/spdlog.h>
+
 #include <CLI/CLI.hpp>
 #include <functional>
+<<<<<<< HEAD
+=======
+#include <iostream>
+#include <memory>
+>>>>>>> main
 #include <optional>
 #include <string>
 #include <vector>
 
+#include "vibtherm/error.hpp"
+#include "vibtherm/ordered_map.hpp"
 #include "vibtherm/thermo.hpp"
 
 namespace vibtherm::cli {
@@ -39,7 +48,13 @@ struct CommonOptions {
   bool transition_state = false;
   double imaginary_as_real_below_cm1 = 0.0;
   bool mode_count_warning = false;
+  unsigned jobs = 0;  // 0: every core
 };
+
+// Adds -j/--jobs (species processed at once; default every core) to a subcommand.
+void add_jobs_option(CLI::App& sub, unsigned& jobs);
+// The thread count for -j: `jobs`, or every core when it is 0.
+unsigned thread_count(unsigned jobs);
 
 // Adds FILE..., --pressure, --standard-state, -o, --keep-going and the model options.
 // `with_temps` adds --temps, `formats` the allowed --format values (none: no --format).
@@ -54,23 +69,106 @@ std::vector<double> temperatures_or(const CommonOptions& options, const std::vec
 // Default table temperatures: 298.15 K, then 300 to 3000 K in steps of 100 K.
 std::vector<double> default_table_temperatures();
 
-struct Batch {
-  std::vector<PreparedSpecies> species;  // in input order
-  std::vector<std::string> failures;     // formatted one-line errors (only with --keep-going)
+// The outputs of one run: each is written to a temporary file beside its target (or, for
+// standard output, to an anonymous one) and all are moved into place together by commit(),
+// so that an error leaves every old output as it was. A replaced file keeps its mode, and
+// a symbolic link is written through (its target replaced), not replaced by a file.
+class OutputSet {
+ public:
+  OutputSet();
+  ~OutputSet();  // removes the temporaries of an uncommitted run
+  OutputSet(const OutputSet&) = delete;
+  OutputSet& operator=(const OutputSet&) = delete;
+  // Opens a temporary for `path` ("-" = standard output); returns its index.
+  std::size_t add(const std::string& path);
+  void write(std::size_t which, std::string_view text);
+  void commit();
+
+ private:
+  struct Item;
+  std::vector<std::unique_ptr<Item>> items_;
 };
 
-// Expands paths, reads and prepares every species. Without --keep-going the first error
-// propagates as InputError; with it, failures are logged and collected.
-Batch load_batch(const CommonOptions& options);
+// Refuses an output path that names one of the input files (or the same file by another
+// path): `what` is the option, e.g. "-o".
+void check_output_is_not_input(const std::string& output, const std::vector<std::string>& inputs,
+                               const std::string& what);
 
 // Writes `content` to `path` ("-" = stdout) through a temporary file renamed into place.
 void write_output(const std::string& path, const std::string& content);
 
-// Logs warnings and notes of each prepared species to stderr (spdlog).
-void log_species_diagnostics(const Batch& batch);
+// A species read and prepared on a worker thread, with the bytes of its file.
+struct SpeciesInput {
+  const std::string& path;
+  const std::string& bytes;
+  const PreparedSpecies& prepared;
+};
 
-// Ends the subcommand: exit_some_failed if the batch had failures, else exit_ok.
-int batch_status(const Batch& batch);
+struct LogLine {
+  spdlog::level::level_enum level;
+  std::string text;
+};
+
+// What a species' work leaves for the in-order consumer.
+template <class Piece>
+struct Outcome {
+  std::optional<Piece> piece;
+  std::optional<InputError> error;
+  std::vector<LogLine> log;  // its warnings and notes, then what the work adds
+};
+
+struct BatchSummary {
+  std::size_t done = 0;               // species that succeeded
+  std::vector<std::string> failures;  // formatted one-line errors (only with --keep-going)
+};
+
+// Outcome<Piece> for one species: read, prepare, then `work` (on a worker thread). An
+// InputError without a file gets the species' file.
+using RawProducer = std::function<void(const SpeciesInput&, std::vector<LogLine>&)>;
+std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
+                                      const RawProducer& work, std::vector<LogLine>& log);
+void emit_log(const std::vector<LogLine>& log);
+
+// Expands the paths, then reads, prepares and runs `work` on every species on o.jobs
+// threads; `consume` gets the pieces on this thread in input order (memory stays bounded
+// by the thread count). Without --keep-going the first error in input order propagates as
+// InputError; with it, failures are printed and collected.
+template <class Piece>
+BatchSummary for_each_species(const CommonOptions& o, const std::vector<std::string>& paths,
+                              const std::function<Piece(const SpeciesInput&, std::vector<LogLine>&)>& work,
+                              const std::function<void(Piece&)>& consume) {
+  const ModelOptions model = model_options(o);
+  BatchSummary summary;
+  ordered_map<Outcome<Piece>>(
+      paths.size(), thread_count(o.jobs),
+      [&](std::size_t i) {
+        Outcome<Piece> out;
+        out.error = run_species(
+            paths[i], model,
+            [&](const SpeciesInput& in, std::vector<LogLine>& log) { out.piece = work(in, log); }, out.log);
+        return out;
+      },
+      [&](std::size_t, Outcome<Piece>& out) {
+        emit_log(out.log);
+        if (out.error) {
+          if (!o.keep_going) throw *out.error;
+          summary.failures.push_back(out.error->what());
+          std::cerr << out.error->what() << '\n';
+          return;
+        }
+        ++summary.done;
+        consume(*out.piece);
+      });
+  return summary;
+}
+
+// The species files of the batch (expanded arguments).
+std::vector<std::string> batch_paths(const CommonOptions& options);
+
+// Ends the subcommand: exit_some_failed if the batch had failures, else exit_ok. With
+// failures and no species done, the outputs are not replaced (an empty file would hide
+// the old results) and that is said.
+int finish_batch(const BatchSummary& batch, OutputSet& outputs);
 
 // Each subcommand file provides one of these; main.cpp lists them in a table.
 void setup_inspect(CLI::App& sub);

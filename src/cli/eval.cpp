@@ -21,6 +21,7 @@ struct EvalOptions {
   std::string temps_text;
   std::string format = "text";
   std::string output = "-";
+  unsigned jobs = 0;
 };
 
 std::string caption(const NasaPolynomial& p) {
@@ -47,7 +48,11 @@ void setup_eval(CLI::App& sub) {
       ->check(CLI::IsMember({"text", "csv", "json"}))
       ->capture_default_str();
   sub.add_option("-o,--output", o->output, "output file ('-' = standard output)")->capture_default_str();
+  add_jobs_option(sub, o->jobs);
   sub.callback([o] {
+    check_output_is_not_input(o->output, {o->file}, "-o");
+    OutputSet outputs;
+    const std::size_t out = outputs.add(o->output);
     const auto all = read_nasa_file(o->file);
     std::vector<const NasaPolynomial*> chosen;
     if (o->species.empty()) {
@@ -88,9 +93,10 @@ void setup_eval(CLI::App& sub) {
       tables.push_back(std::move(table));
     }
     const std::string& f = o->format;
-    write_output(o->output, f == "json"  ? table_json(tables)
-                            : f == "csv" ? table_csv(tables)
-                                         : table_text(tables));
+    outputs.write(out, f == "json"  ? table_json(tables)
+                       : f == "csv" ? table_csv(tables)
+                                    : table_text(tables));
+    outputs.commit();
   });
 }
 

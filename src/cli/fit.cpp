@@ -3,14 +3,13 @@
 #include <spdlog/spdlog.h>
 
 #include <algorithm>
-#include <fstream>
 #include <iostream>
 #include <memory>
-#include <sstream>
 
 #include "common.hpp"
 #include "vibtherm/checksum.hpp"
 #include "vibtherm/fit_nasa.hpp"
+#include "vibtherm/fit_plan.hpp"
 #include "vibtherm/write_fit_json.hpp"
 #include "vibtherm/write_nasa7.hpp"
 #include "vibtherm/write_nasa9.hpp"
@@ -29,13 +28,6 @@ struct FitCliOptions {
   bool no_wrapper = false;
 };
 
-std::string file_sha256(const std::string& path) {
-  std::ifstream in(path, std::ios::binary);
-  std::ostringstream bytes;
-  bytes << in.rdbuf();
-  return sha256_hex(bytes.str());
-}
-
 std::vector<std::pair<std::string, std::string>> model_option_list(const FitCliOptions& o) {
   return {{"standard_state", o.common.standard_state},
           {"pressure", o.common.pressure_text.empty() ? "standard state" : o.common.pressure_text},
@@ -45,7 +37,7 @@ std::vector<std::pair<std::string, std::string>> model_option_list(const FitCliO
           {"allow_missing_hf", o.allow_missing_hf ? "true" : "false"}};
 }
 
-void log_fit(const SpeciesFit& f) {
+void log_fit(const SpeciesFit& f, std::vector<LogLine>& log) {
   const FitResult& r = f.fit;
   std::string ranges;
   for (const auto& e : r.errors)
@@ -53,12 +45,13 @@ void log_fit(const SpeciesFit& f) {
         "; {:g}-{:g} K: Cp max {:.3f} % rms {:.3f} %, H max {:.3f} kJ/mol, S max {:.4f} J/(mol K)", e.T_low_K,
         e.T_high_K, 100 * e.max_Cp_relative, 100 * e.rms_Cp_relative, e.max_H_J_per_mol / 1e3,
         e.max_S_J_per_mol_K);
-  spdlog::info("{}: fit{}", r.name, ranges);
+  log.push_back({spdlog::level::info, fmt::format("{}: fit{}", r.name, ranges)});
   if (r.searched_index >= 0)
-    spdlog::info("{}: breakpoint searched: {:g} K (largest Cp error {:.3f} %)", r.name,
-                 r.breakpoints_K[r.searched_index], 100 * r.searched_max_Cp_relative);
-  for (const auto& w : r.warnings) spdlog::warn("{}", w);
-  for (const auto& n : f.notes) spdlog::warn("{}: {}", r.name, n);
+    log.push_back({spdlog::level::info,
+                   fmt::format("{}: breakpoint searched: {:g} K (largest Cp error {:.3f} %)", r.name,
+                               r.breakpoints_K[r.searched_index], 100 * r.searched_max_Cp_relative)});
+  for (const auto& w : r.warnings) log.push_back({spdlog::level::warn, w});
+  for (const auto& n : f.notes) log.push_back({spdlog::level::warn, fmt::format("{}: {}", r.name, n)});
 }
 
 }  // namespace
@@ -92,25 +85,24 @@ void setup_fit(CLI::App& sub) {
       fail({}, fmt::format("--grid-step {}: expected a positive step in K", o->grid_step_K));
     fit.grid_step_K = o->grid_step_K;
 
-    Batch batch = load_batch(o->common);
-    log_species_diagnostics(batch);
+    const auto paths = batch_paths(o->common);
+    check_output_is_not_input(o->common.output, paths, "-o");
+    OutputSet outputs;
+    const std::size_t out = outputs.add(o->common.output);
+    const FitPlan plan(fit);  // grid, basis and constraint factorisation shared by every species
+    const auto options_list = model_option_list(*o);
     std::vector<FitRecord> records;
-    for (const auto& p : batch.species) {
-      try {
-        SpeciesFit f = fit_species(p, fit);
-        // Check that the record fits its format now, so one bad name fails one species.
-        if (o->form == "nasa7") write_nasa7_record(std::get<Nasa7>(f.polynomial));
-        if (o->form == "nasa9") write_nasa9_record(std::get<Nasa9>(f.polynomial));
-        log_fit(f);
-        const std::string& file = p.species.origin.file;
-        records.push_back(
-            {std::move(f), {file, file.empty() ? "" : file_sha256(file), model_option_list(*o)}});
-      } catch (const InputError& e) {
-        if (!o->common.keep_going) throw;
-        batch.failures.push_back(e.what());
-        std::cerr << e.what() << '\n';
-      }
-    }
+    const BatchSummary batch = for_each_species<FitRecord>(
+        o->common, paths,
+        [&](const SpeciesInput& in, std::vector<LogLine>& log) {
+          SpeciesFit f = fit_species(in.prepared, plan);
+          // Check that the record fits its format now, so one bad name fails one species.
+          if (o->form == "nasa7") write_nasa7_record(std::get<Nasa7>(f.polynomial));
+          if (o->form == "nasa9") write_nasa9_record(std::get<Nasa9>(f.polynomial));
+          log_fit(f, log);
+          return FitRecord{std::move(f), {in.path, sha256_hex(in.bytes), options_list}};
+        },
+        [&](FitRecord& r) { records.push_back(std::move(r)); });
     const std::vector<std::string> header = {
         fmt::format("vibtherm {}: rigid-rotor harmonic-oscillator model, constrained fit", VIBTHERM_VERSION),
         fmt::format("standard state {}, frequency scale {:g}", o->common.standard_state,
@@ -127,8 +119,8 @@ void setup_fit(CLI::App& sub) {
       for (const auto& r : records) polys.push_back(std::get<Nasa7>(r.fit.polynomial));
       text = write_nasa7(polys, Nasa7WriteOptions{!o->no_wrapper, header});
     }
-    write_output(o->common.output, text);
-    throw Exit{batch_status(batch)};
+    outputs.write(out, text);
+    throw Exit{finish_batch(batch, outputs)};
   });
 }
 

@@ -11,15 +11,20 @@ void setup_inspect(CLI::App& sub) {
   auto options = std::make_shared<CommonOptions>();
   add_common_options(sub, *options, false, {"text", "csv", "json"});
   sub.callback([options] {
-    const Batch batch = load_batch(*options);
-    log_species_diagnostics(batch);
+    const auto paths = batch_paths(*options);
+    check_output_is_not_input(options->output, paths, "-o");
+    OutputSet outputs;
+    const std::size_t out = outputs.add(options->output);
     std::vector<SpeciesFacts> facts;
-    for (const auto& p : batch.species) facts.push_back(describe_species(p));
+    const BatchSummary batch = for_each_species<SpeciesFacts>(
+        *options, paths,
+        [](const SpeciesInput& in, std::vector<LogLine>&) { return describe_species(in.prepared); },
+        [&](SpeciesFacts& f) { facts.push_back(std::move(f)); });
     const std::string& f = options->format;
-    write_output(options->output, f == "json"  ? inspect_json(facts)
-                                  : f == "csv" ? inspect_csv(facts)
-                                               : inspect_text(facts));
-    throw Exit{batch_status(batch)};
+    outputs.write(out, f == "json"  ? inspect_json(facts)
+                       : f == "csv" ? inspect_csv(facts)
+                                    : inspect_text(facts));
+    throw Exit{finish_batch(batch, outputs)};
   });
 }
 

@@ -36,26 +36,36 @@ void setup_modes(CLI::App& sub) {
   sub.callback([options, thresholds, svg_path] {
     validate(*thresholds);
     const auto temps = temperatures_or(*options, default_modes_temperatures());
-    const Batch batch = load_batch(*options);
-    log_species_diagnostics(batch);
-    std::vector<ModesReport> reports;
-    for (const auto& p : batch.species) reports.push_back(analyse_modes(p, temps, *thresholds));
+    const auto paths = batch_paths(*options);
+    check_output_is_not_input(options->output, paths, "-o");
+    check_output_is_not_input(*svg_path, paths, "--svg");
+    if (!svg_path->empty() && *svg_path == options->output)
+      fail({}, "-o and --svg name the same file, expected two different outputs");
+    // Both outputs are opened first and moved into place together at the end.
+    OutputSet outputs;
+    const std::size_t out = outputs.add(options->output);
+    const std::size_t svg = svg_path->empty() ? 0 : outputs.add(*svg_path);
+    const auto [low, high] = svg_temperature_span_K(temps);
+    const auto samples = log_spaced_temperatures(low, high, svg_samples_per_species);
+    std::vector<ModesReport> reports, dense;
+    using Pair = std::pair<ModesReport, std::optional<ModesReport>>;
+    const BatchSummary batch = for_each_species<Pair>(
+        *options, paths,
+        [&](const SpeciesInput& in, std::vector<LogLine>&) {
+          Pair p{analyse_modes(in.prepared, temps, *thresholds), std::nullopt};
+          if (!svg_path->empty()) p.second = analyse_modes(in.prepared, samples, *thresholds);
+          return p;
+        },
+        [&](Pair& p) {
+          reports.push_back(std::move(p.first));
+          if (p.second) dense.push_back(std::move(*p.second));
+        });
     const std::string& f = options->format;
-    const std::string content = f == "json"  ? modes_to_json(reports)
-                                : f == "csv" ? modes_to_csv(reports)
-                                             : modes_to_text(reports);
-    std::string picture;
-    if (!svg_path->empty()) {
-      const auto [low, high] = svg_temperature_span_K(temps);
-      const auto samples = log_spaced_temperatures(low, high, svg_samples_per_species);
-      std::vector<ModesReport> dense;
-      for (const auto& p : batch.species) dense.push_back(analyse_modes(p, samples, *thresholds));
-      picture = modes_to_svg(dense);
-    }
-    // Both outputs are complete before either is written.
-    write_output(options->output, content);
-    if (!svg_path->empty()) write_output(*svg_path, picture);
-    throw Exit{batch_status(batch)};
+    outputs.write(out, f == "json"  ? modes_to_json(reports)
+                       : f == "csv" ? modes_to_csv(reports)
+                                    : modes_to_text(reports));
+    if (!svg_path->empty()) outputs.write(svg, modes_to_svg(dense));
+    throw Exit{finish_batch(batch, outputs)};
   });
 }
 

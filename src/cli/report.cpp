@@ -55,19 +55,21 @@ void setup_report(CLI::App& sub) {
         o->range.empty() ? default_fit_range(NasaForm::nasa7) : parse_fit_range(o->range, NasaForm::nasa7);
     report.fit.allow_missing_hf = o->allow_missing_hf;
 
-    Batch batch = load_batch(o->common);
-    log_species_diagnostics(batch);
+    const auto paths = batch_paths(o->common);
+    check_output_is_not_input(o->common.output, paths, "-o");
+    OutputSet outputs;
+    const std::size_t out = outputs.add(o->common.output);
     std::vector<ReportSpecies> species;
-    for (const auto& p : batch.species) {
-      try {
-        species.push_back(gather_report_species(p, report));
-        if (!species.back().fit) spdlog::warn("{}: {}", p.species.name, species.back().not_fitted_reason);
-      } catch (const InputError& e) {
-        if (!o->common.keep_going) throw;
-        batch.failures.push_back(e.what());
-        std::cerr << e.what() << '\n';
-      }
-    }
+    const BatchSummary batch = for_each_species<ReportSpecies>(
+        o->common, paths,
+        [&](const SpeciesInput& in, std::vector<LogLine>& log) {
+          ReportSpecies r = gather_report_species(in.prepared, report);
+          if (!r.fit)
+            log.push_back(
+                {spdlog::level::warn, fmt::format("{}: {}", in.prepared.species.name, r.not_fitted_reason)});
+          return r;
+        },
+        [&](ReportSpecies& r) { species.push_back(std::move(r)); });
     const ModelOptions model = model_options(o->common);
     const auto& bp = report.fit.range.breakpoints_K;
     ReportHeader header{
@@ -80,10 +82,10 @@ void setup_report(CLI::App& sub) {
              "NASA-7 fit: {:g} to {:g} K, breakpoint {}; H(298.15 K) = ΔfH° from the input", bp.front(),
              bp.back(),
              report.fit.range.auto_index >= 0 ? std::string("searched") : fmt::format("{:g} K", bp[1]))}};
-    write_output(o->common.output,
-                 write_report_html(species, header,
-                                   {o->axis == "linear" ? TemperatureAxis::linear : TemperatureAxis::log}));
-    throw Exit{batch_status(batch)};
+    outputs.write(out,
+                  write_report_html(species, header,
+                                    {o->axis == "linear" ? TemperatureAxis::linear : TemperatureAxis::log}));
+    throw Exit{finish_batch(batch, outputs)};
   });
 }
 

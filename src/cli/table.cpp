@@ -50,19 +50,36 @@ void setup_table(CLI::App& sub) {
                "add the per-motion contributions (translation, rotation, vibration, electronic)");
   sub.callback([options, breakdown] {
     const auto temps = temperatures_or(*options, default_table_temperatures());
-    const Batch batch = load_batch(*options);
-    log_species_diagnostics(batch);
-    std::vector<SpeciesTable> tables;
-    for (const auto& p : batch.species)
-      tables.push_back(
-          {p.species.name, caption(p), tabulate(p, temps), true,
-           p.tunnelling ? tunnelling_table(*p.tunnelling, temps) : std::vector<TunnellingPoint>{}, p.notes});
-    const TableWriteOptions write{*breakdown};
+    const auto paths = batch_paths(*options);
+    check_output_is_not_input(options->output, paths, "-o");
     const std::string& f = options->format;
-    write_output(options->output, f == "json"  ? table_json(tables, write)
-                                  : f == "csv" ? table_csv(tables, write)
-                                               : table_text(tables, write));
-    throw Exit{batch_status(batch)};
+    const TableFormat format = f == "json"  ? TableFormat::json
+                               : f == "csv" ? TableFormat::csv
+                                            : TableFormat::text;
+    const TableWriteOptions write{*breakdown};
+    OutputSet outputs;
+    const std::size_t out = outputs.add(options->output);
+    outputs.write(out, table_begin(format, write));
+    // Each species' piece of the output is formatted on its worker; only the pieces in
+    // flight are held, so the memory does not grow with the batch.
+    const BatchSummary batch = for_each_species<std::string>(
+        *options, paths,
+        [&](const SpeciesInput& in, std::vector<LogLine>&) {
+          const PreparedSpecies& p = in.prepared;
+          return table_piece(
+              format,
+              {p.species.name, caption(p), tabulate(p, temps), true,
+               p.tunnelling ? tunnelling_table(*p.tunnelling, temps) : std::vector<TunnellingPoint>{},
+               p.notes},
+              write);
+        },
+        [&, first = true](std::string& piece) mutable {
+          if (!first) outputs.write(out, table_separator(format));
+          first = false;
+          outputs.write(out, piece);
+        });
+    outputs.write(out, table_end(format, batch.done));
+    throw Exit{finish_batch(batch, outputs)};
   });
 }
 

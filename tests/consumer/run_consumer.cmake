@@ -1,4 +1,5 @@
-# Installs the built project into WORK_DIR/prefix, builds tests/consumer against it, runs it.
+# Installs the built project into WORK_DIR/prefix, builds tests/consumer against it, runs it;
+# when PYTHON is given, also imports the installed Python module from PYTHON_DIR there.
 file(REMOVE_RECURSE ${WORK_DIR})
 execute_process(COMMAND ${CMAKE_COMMAND} --install ${BINARY_DIR} --prefix ${WORK_DIR}/prefix
                 RESULT_VARIABLE status OUTPUT_QUIET)
@@ -17,4 +18,12 @@ endif()
 execute_process(COMMAND ${WORK_DIR}/build/consumer RESULT_VARIABLE status)
 if(status)
   message(FATAL_ERROR "the consumer gave the wrong entropy")
+endif()
+if(PYTHON)
+  execute_process(COMMAND ${CMAKE_COMMAND} -E env PYTHONPATH=${WORK_DIR}/prefix/${PYTHON_DIR}
+                          ${PYTHON} -c "import vibtherm; print(vibtherm.__file__, vibtherm.__version__)"
+                  RESULT_VARIABLE status)
+  if(status)
+    message(FATAL_ERROR "the installed Python module does not import")
+  endif()
 endif()
