@@ -24,7 +24,7 @@ const char* low_frequency_method_name(LowFrequencyMethod method) {
   return "";
 }
 
-void validate(const LowFrequencyOptions& o) {
+void check_low_frequency_options(const LowFrequencyOptions& o) {
   const auto check = [](double value, const char* what) {
     if (!(value > 0.0) || !std::isfinite(value))
       fail({}, fmt::format("{} must be a positive finite number, got {}", what, value));
@@ -64,7 +64,7 @@ const AdjustedMode* VibrationAdjustment::find(int index) const {
 VibrationAdjustment plan_vibration_adjustment(const LowFrequencyOptions& options,
                                               std::span<const double> entropy_cm1,
                                               std::span<const double> enthalpy_cm1) {
-  validate(options);
+  check_low_frequency_options(options);
   VibrationAdjustment plan;
   plan.options = options;
   for (std::size_t i = 0; i < entropy_cm1.size(); ++i) {

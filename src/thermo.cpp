@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <cmath>
 
+#include "vibtherm/conformers.hpp"
 #include "vibtherm/hessian.hpp"
 
 namespace vibtherm {
@@ -55,7 +56,7 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
     p.tunnelling = TransitionStateTunnelling{std::abs(*it), std::nullopt};
     if (const auto& b = p.species.tunnelling) {
       p.tunnelling->eckart = EckartBarrier{b->forward_J_per_mol, b->reverse_J_per_mol, std::abs(*it)};
-      validate(*p.tunnelling->eckart);
+      check_eckart_barrier(*p.tunnelling->eckart);
     }
     p.notes.push_back(tunnelling_note(*p.tunnelling));
   }
@@ -195,10 +196,23 @@ class Evaluator {
     const auto& levels = p.species.electronic_levels;
     single_level_ = levels.size() <= 1;
     if (single_level_) electronic_ = electronic_terms(levels, 1.0);  // ln g, the same at every T
+    for (const ConformerMember& m : p.conformers) {
+      members_.emplace_back(m.prepared);
+      levels_J_per_mol_.push_back(m.level_J_per_mol);
+    }
+  }
+
+  // An ensemble's thermal functions from its members' (conformers.hpp).
+  ThermoPoint ensemble_terms(double T_K, std::vector<double>* populations) const {
+    std::vector<ThermoPoint> points;
+    points.reserve(members_.size());
+    for (const Evaluator& m : members_) points.push_back(m.terms(T_K));
+    return combine_conformers(points, levels_J_per_mol_, T_K, populations);
   }
 
   // Thermal functions at T without the H(298.15) reference.
   ThermoPoint terms(double T_K) const {
+    if (!members_.empty()) return ensemble_terms(T_K, nullptr);
     ThermoPoint point;
     point.T_K = T_K;
     if (p_.is_gas) {
@@ -243,11 +257,75 @@ class Evaluator {
   std::vector<double> theta_K_;
   bool single_level_ = true;
   MotionTerms electronic_;
+  std::vector<Evaluator> members_;
+  std::vector<double> levels_J_per_mol_;
 };
+
+// An ensemble: every conformer prepared on its own (inheriting the ensemble's model keys
+// it does not set), placed at its zero-point level, then described by the lowest one.
+PreparedSpecies prepare_ensemble(const Species& species, const ModelOptions& options) {
+  std::vector<ConformerMember> members;
+  for (const Conformer& c : species.conformers) {
+    Species s = c.species;
+    if (!s.low_frequency) s.low_frequency = species.low_frequency;
+    if (s.scale.empty()) s.scale = species.scale;
+    ConformerMember m{c.file, prepare_species(s, options), c.relative_energy_J_per_mol, 0.0};
+    const PreparedSpecies& first = members.empty() ? m.prepared : members.front().prepared;
+    if (m.prepared.species.formula != first.species.formula || m.prepared.is_gas != first.is_gas)
+      fail(c.where, fmt::format("conformer {} ('{}') has another composition or phase than conformer 1, "
+                                "expected conformers of one species",
+                                members.size() + 1, c.file));
+    // Electronic energies: the zero-point level is ΔE + ZPE; ZPE-inclusive ones are that already.
+    m.level_J_per_mol =
+        c.relative_energy_J_per_mol +
+        (species.conformer_energies_include_zpe ? 0.0 : m.prepared.zero_point_energy_J_per_mol);
+    members.push_back(std::move(m));
+  }
+  std::size_t ground = 0;
+  for (std::size_t i = 0; i < members.size(); ++i)
+    if (members[i].level_J_per_mol < members[ground].level_J_per_mol) ground = i;
+  const double lowest = members[ground].level_J_per_mol;
+  std::size_t reference = 0;  // the conformer the relative energies are counted from
+  for (std::size_t i = 0; i < members.size(); ++i)
+    if (members[i].relative_energy_J_per_mol < members[reference].relative_energy_J_per_mol) reference = i;
+
+  PreparedSpecies p = members[ground].prepared;
+  p.species.name = species.name;
+  p.species.origin = species.origin;
+  p.species.enthalpy_of_formation_J_per_mol = species.enthalpy_of_formation_J_per_mol;
+  p.tunnelling.reset();
+  // The ensemble's 0 K level above the electronic energy of the reference conformer.
+  p.zero_point_energy_J_per_mol = species.conformer_energies_include_zpe
+                                      ? members[reference].prepared.zero_point_energy_J_per_mol + lowest -
+                                            members[reference].relative_energy_J_per_mol
+                                      : lowest - members[reference].relative_energy_J_per_mol;
+  p.warnings.clear();
+  p.notes.clear();
+  p.notes.push_back(fmt::format(
+      "conformer ensemble of {}: Boltzmann-weighted sum of partition functions, each conformer with its own "
+      "structure, symmetry number, frequencies and ZPE; relative energies {}; facts and modes shown are "
+      "those "
+      "of the lowest zero-point level, conformer {} ('{}')",
+      members.size(),
+      species.conformer_energies_include_zpe ? "given including the zero-point energy"
+                                             : "electronic, each conformer's ZPE added",
+      ground + 1, members[ground].file));
+  for (std::size_t i = 0; i < members.size(); ++i) {
+    members[i].level_J_per_mol -= lowest;
+    for (const std::string& w : members[i].prepared.warnings)
+      p.warnings.push_back(fmt::format("conformer {} ('{}'): {}", i + 1, members[i].file, w));
+    for (const std::string& n : members[i].prepared.notes)
+      p.notes.push_back(fmt::format("conformer {} ('{}'): {}", i + 1, members[i].file, n));
+  }
+  p.conformers = std::move(members);
+  p.H298_minus_H0_J_per_mol = Evaluator(p).terms(c::reference_temperature_K).H_minus_H0_J_per_mol;
+  return p;
+}
 
 }  // namespace
 
 PreparedSpecies prepare_species(const Species& species, const ModelOptions& options) {
+  if (!species.conformers.empty()) return prepare_ensemble(species, options);
   PreparedSpecies p;
   p.species = species;
   p.options = options;
@@ -317,6 +395,12 @@ double classical_Cv_over_R(const PreparedSpecies& prepared) {
   if (prepared.rotor.type == RotorType::linear) rotation = 1.0;
   if (prepared.rotor.type == RotorType::nonlinear) rotation = 1.5;
   return 1.5 + rotation + vibrations + 0.5 * static_cast<double>(prepared.hindered_rotors.size());
+}
+
+std::vector<double> conformer_populations(const PreparedSpecies& prepared, double T_K) {
+  std::vector<double> populations;
+  if (!prepared.conformers.empty()) Evaluator(prepared).ensemble_terms(T_K, &populations);
+  return populations;
 }
 
 }  // namespace vibtherm

@@ -19,7 +19,7 @@ double wigner_kappa(double imaginary_wavenumber_cm1, double T_K) {
   return 1.0 + u * u / 24.0;
 }
 
-void validate(const EckartBarrier& b) {
+void check_eckart_barrier(const EckartBarrier& b) {
   const auto check = [](double v, const char* what) {
     if (!(v > 0.0) || !std::isfinite(v))
       fail({}, fmt::format("Eckart tunnelling needs a positive {}, got {}", what, v));
@@ -108,12 +108,12 @@ double converged_integral(F&& f, double a, double b) {
 }  // namespace
 
 double eckart_transmission(const EckartBarrier& barrier, double energy_J_per_mol) {
-  validate(barrier);
+  check_eckart_barrier(barrier);
   return std::exp(ln_transmission(shape_of(barrier), energy_J_per_mol));
 }
 
 std::optional<double> eckart_kappa(const EckartBarrier& barrier, double T_K) {
-  validate(barrier);
+  check_eckart_barrier(barrier);
   if (!(T_K > 0.0) || !std::isfinite(T_K))
     fail({}, fmt::format("temperature must be positive, got {} K", T_K));
   const EckartShape s = shape_of(barrier);
@@ -157,7 +157,13 @@ std::string tunnelling_note(const TransitionStateTunnelling& ts) {
         ts.eckart->forward_J_per_mol / 1e3, ts.eckart->reverse_J_per_mol / 1e3);
   else
     note += "; give 'tunnelling: {forward_barrier, reverse_barrier}' for the Eckart correction";
-  return note + "; kappa is reported beside the thermochemistry, not applied to it";
+  const double T = c::reference_temperature_K;
+  note += fmt::format("; kappa(298.15 K): Wigner {:.4f}", wigner_kappa(ts.imaginary_wavenumber_cm1, T));
+  if (ts.eckart) {
+    const auto eckart = eckart_kappa(*ts.eckart, T);
+    note += eckart ? fmt::format(", Eckart {:.4f}", *eckart) : std::string(", Eckart above 1e300");
+  }
+  return note + " (reported beside the thermochemistry, not applied to it)";
 }
 
 }  // namespace vibtherm

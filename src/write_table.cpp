@@ -58,6 +58,12 @@ std::string text_piece(const SpeciesTable& table, const TableWriteOptions& optio
       head += fmt::format(" {:>11} {:>11}", "kappa.Wig", "kappa.Eck");
       units += fmt::format(" {:>11} {:>11}", "1", "1");
     }
+    const bool populations = table.populations.size() == table.rows.size() && !table.rows.empty();
+    if (populations)
+      for (std::size_t j = 0; j < table.conformer_files.size(); ++j) {
+        head += fmt::format(" {:>8}", fmt::format("pop.{}", j + 1));
+        units += fmt::format(" {:>8}", "1");
+      }
     out += head + '\n' + units + '\n';
     for (std::size_t i = 0; i < table.rows.size(); ++i) {
       const auto& r = table.rows[i];
@@ -74,8 +80,14 @@ std::string text_piece(const SpeciesTable& table, const TableWriteOptions& optio
         const TunnellingPoint& k = table.tunnelling[i];
         line += fmt::format(" {:>11.5g} {:>11}", k.wigner, k.eckart ? fmt::format("{:.5g}", *k.eckart) : "-");
       }
+      if (populations)
+        for (double x : table.populations[i]) line += fmt::format(" {:>8.4f}", x);
       out += line + '\n';
     }
+    if (populations)
+      for (std::size_t j = 0; j < table.conformer_files.size(); ++j)
+        out +=
+            fmt::format("pop.{}: population of conformer {} ({})\n", j + 1, j + 1, table.conformer_files[j]);
   }
   return out;
 }
@@ -162,6 +174,7 @@ std::string json_piece(const SpeciesTable& table, const TableWriteOptions& optio
     nlohmann::ordered_json entry;
     entry["name"] = table.name;
     if (!table.notes.empty()) entry["notes"] = table.notes;
+    if (!table.conformer_files.empty()) entry["conformers"] = table.conformer_files;
     entry["rows"] = nlohmann::ordered_json::array();
     for (std::size_t i = 0; i < table.rows.size(); ++i) {
       const auto& r = table.rows[i];
@@ -183,7 +196,16 @@ std::string json_piece(const SpeciesTable& table, const TableWriteOptions& optio
                                     {"H_minus_H0", t.H_over_RT * R * r.T_K / 1e3},
                                     {"ln_q", t.ln_q}};
         }
+        if (!table.conformer_files.empty()) {
+          const MotionTerms& t = r.conformers;
+          row["motions"]["conformers"] = {{"Cp", t.Cp_over_R * R},
+                                          {"Cv", t.Cv_over_R * R},
+                                          {"S", t.S_over_R * R},
+                                          {"H_minus_H0", t.H_over_RT * R * r.T_K / 1e3},
+                                          {"ln_q", t.ln_q}};
+        }
       }
+      if (i < table.populations.size()) row["populations"] = table.populations[i];
       if (i < table.tunnelling.size()) {
         row["kappa_wigner"] = table.tunnelling[i].wigner;
         if (table.tunnelling[i].eckart) row["kappa_eckart"] = *table.tunnelling[i].eckart;

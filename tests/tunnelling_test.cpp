@@ -40,8 +40,6 @@ TEST_CASE("Eckart kappa tends to 1 at high T and exceeds Wigner at low T") {
   CHECK(*eckart_kappa(thin, 1e5) == doctest::Approx(1.0).epsilon(1e-3));
   CHECK(std::abs(*eckart_kappa(thin, 1e5) - 1.0) < std::abs(*eckart_kappa(thin, 3000.0) - 1.0));
   for (double T : {200.0, 250.0, 300.0}) CHECK(*eckart_kappa(thin, T) > wigner_kappa(2000.0, T));
-  // At high T both approach 1 + u²/24 from the same leading term (Wigner is the first order of κ).
-  CHECK(*eckart_kappa(thin, 5000.0) == doctest::Approx(wigner_kappa(2000.0, 5000.0)).epsilon(2e-3));
   // Deep tunnelling far below any sensible temperature overflows and is reported as absent.
   CHECK_FALSE(eckart_kappa({200e3, 200e3, 3000.0}, 5.0).has_value());
 }

@@ -28,7 +28,7 @@ struct LowFrequencyOptions {
 };
 
 // Throws InputError for non-positive or non-finite parameters.
-void validate(const LowFrequencyOptions& options);
+void check_low_frequency_options(const LowFrequencyOptions& options);
 
 // Grimme's damping function w(ω) = 1 / (1 + (ω₀/ω)^α) (eq. 8): 1/2 at ω = ω₀.
 double qrrho_weight(double wavenumber_cm1, double omega0_cm1, double exponent);

@@ -72,6 +72,8 @@ struct RigidRotorData {
   bool linear = false;
 };
 
+struct Conformer;
+
 struct Species {
   std::string name;
   SourceLocation origin;    // file the species came from
@@ -92,6 +94,17 @@ struct Species {
   std::optional<LowFrequencyMethod> low_frequency;  // input key; --low-freq overrides
   ScaleFactors scale;                               // input key `scale`
   std::optional<TunnellingBarriers> tunnelling;     // input key `tunnelling` (transition states)
+  // A Boltzmann ensemble of conformers instead of one structure (conformers.hpp); each
+  // brings its own geometry, symmetry number, frequencies and zero-point energy.
+  std::vector<Conformer> conformers;
+  bool conformer_energies_include_zpe = false;  // `conformer_energies: zero_point_inclusive`
+};
+
+struct Conformer {
+  SourceLocation where;                    // the entry in the ensemble's file
+  std::string file;                        // as written (relative to the ensemble's file)
+  Species species;                         // read from `file`
+  double relative_energy_J_per_mol = 0.0;  // electronic (or ZPE-inclusive), relative to the lowest
 };
 
 }  // namespace vibtherm

@@ -33,6 +33,8 @@ struct ModelOptions {
   double linear_tolerance_amu_A2 = default_linear_tolerance_amu_A2;
 };
 
+struct ConformerMember;
+
 struct PreparedSpecies {
   Species species;
   ModelOptions options;
@@ -49,7 +51,20 @@ struct PreparedSpecies {
   double H298_minus_H0_J_per_mol = 0.0;      // thermal enthalpy at 298.15 K, the table's reference
   std::vector<std::string> warnings;         // things the user must see
   std::vector<std::string> notes;            // model choices worth stating
+  // An ensemble (species.conformers): its members; the fields above then describe the
+  // member with the lowest zero-point level, except name, origin, ΔfH°, ZPE and H298.
+  std::vector<ConformerMember> conformers;
 };
+
+struct ConformerMember {
+  std::string file;                        // as given in the ensemble file
+  PreparedSpecies prepared;                // prepared on its own under the same options
+  double relative_energy_J_per_mol = 0.0;  // as given (electronic, or ZPE-inclusive)
+  double level_J_per_mol = 0.0;            // its zero-point level above the ensemble's lowest
+};
+
+// Boltzmann populations of an ensemble's conformers at T (empty for a single structure).
+std::vector<double> conformer_populations(const PreparedSpecies& prepared, double T_K);
 
 // Validates and prepares. Throws InputError (located at the species file) for imaginary
 // frequencies not allowed by the options and for a wrong mode count unless downgraded.
@@ -59,6 +74,7 @@ struct ThermoPoint {
   double T_K = 0.0;
   MotionTerms translation, rotation, vibration, electronic;  // dimensionless, per motion
   MotionTerms internal_rotation;                             // all hindered rotors together
+  MotionTerms conformers;  // ensembles: mixing and level terms beyond the population-weighted motions
   double Cv_J_per_mol_K = 0.0;
   double Cp_J_per_mol_K = 0.0;
   double S_J_per_mol_K = 0.0;

@@ -25,7 +25,7 @@ struct EckartBarrier {
 };
 
 // Throws InputError unless both heights and the wavenumber are positive and finite.
-void validate(const EckartBarrier& barrier);
+void check_eckart_barrier(const EckartBarrier& barrier);
 
 // Transmission probability P(E) through the Eckart barrier for a molar energy E above the
 // reactant asymptote (Eckart 1930, exact): with C = (h ν‡)² B / (16 V1 V2) (molar),

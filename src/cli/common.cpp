@@ -91,7 +91,7 @@ ModelOptions model_options(const CommonOptions& o) {
   m.low_frequency.qrrho_omega0_cm1 = o.qrrho_omega0_cm1;
   m.low_frequency.floor_cm1 = o.floor_cm1;
   m.low_frequency.soft_mode_warning_below_cm1 = o.soft_mode_warning_below_cm1;
-  validate(m.low_frequency);
+  check_low_frequency_options(m.low_frequency);
   m.transition_state = o.transition_state;
   m.imaginary_as_real_below_cm1 = o.imaginary_as_real_below_cm1;
   m.mode_count_mismatch_is_warning = o.mode_count_warning;

@@ -6,11 +6,8 @@
 
 #include <CLI/CLI.hpp>
 #include <functional>
-<<<<<<< HEAD
-=======
 #include <iostream>
 #include <memory>
->>>>>>> main
 #include <optional>
 #include <string>
 #include <vector>

@@ -66,12 +66,12 @@ void setup_table(CLI::App& sub) {
         *options, paths,
         [&](const SpeciesInput& in, std::vector<LogLine>&) {
           const PreparedSpecies& p = in.prepared;
-          return table_piece(
-              format,
-              {p.species.name, caption(p), tabulate(p, temps), true,
-               p.tunnelling ? tunnelling_table(*p.tunnelling, temps) : std::vector<TunnellingPoint>{},
-               p.notes},
-              write);
+          SpeciesTable table{p.species.name, caption(p), tabulate(p, temps), true, {}, p.notes, {}, {}};
+          if (p.tunnelling) table.tunnelling = tunnelling_table(*p.tunnelling, temps);
+          for (const ConformerMember& m : p.conformers) table.conformer_files.push_back(m.file);
+          if (!p.conformers.empty())
+            for (double T : temps) table.populations.push_back(conformer_populations(p, T));
+          return table_piece(format, table, write);
         },
         [&, first = true](std::string& piece) mutable {
           if (!first) outputs.write(out, table_separator(format));

@@ -112,4 +112,28 @@ c.check("text table has the kappa columns", "kappa.Wig" in r.stdout and "kappa.E
 ins, r = json_of("inspect", ts)
 c.check("inspect notes the tunnelling corrections", ins is not None and
         any("Eckart" in n for n in ins["species"][0]["notes"]), r.stderr)
+# --- conformer ensembles -------------------------------------------------------------------
+water = os.path.join(data, "water.yaml")
+pair = os.path.join(data, "model-conformers.yaml")
+high = os.path.join(data, "model-conformers-high.yaml")
+one, r1 = json_of("table", water, "--temps", "300,1000")
+two, r2 = json_of("table", pair, "--temps", "300,1000")
+hi, r3 = json_of("table", high, "--temps", "300")
+c.check("ensemble tables exit 0", None not in (one, two, hi), r1.stderr + r2.stderr + r3.stderr)
+if None not in (one, two, hi):
+    R = 8.31446261815324  # N_A k_B, CODATA 2018 exact
+    for T in (300.0, 1000.0):
+        c.check(f"two identical conformers: S + R ln 2 at {T:g} K (common practice)",
+                abs(row(two, T)["S"] - row(one, T)["S"] - R * math.log(2)) < 1e-6, (row(two, T), row(one, T)))
+        c.check(f"two identical conformers: the same Cp at {T:g} K", abs(row(two, T)["Cp"] - row(one, T)["Cp"]) < 1e-6)
+        c.check(f"populations 1/2 each at {T:g} K", all(abs(p - 0.5) < 1e-12 for p in row(two, T)["populations"]))
+    c.check("a conformer 100 kJ/mol higher changes nothing at 300 K (1e-9)",
+            abs(row(hi, 300)["S"] - row(one, 300)["S"]) <= 1e-9 * row(one, 300)["S"] and
+            abs(row(hi, 300)["Cp"] - row(one, 300)["Cp"]) <= 1e-9 * row(one, 300)["Cp"])
+ins, r = json_of("inspect", pair)
+c.check("inspect lists the conformers with populations", ins is not None and
+        len(ins["species"][0].get("conformers", [])) == 2 and
+        abs(ins["species"][0]["conformers"][0]["populations"][0] - 0.5) < 1e-12, r.stderr)
+r = c.run("table", pair, "--temps", "300")
+c.check("text table shows the population columns", "pop.1" in r.stdout and "pop.2" in r.stdout, r.stdout)
 c.finish()
