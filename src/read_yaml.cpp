@@ -349,6 +349,7 @@ Species YamlReader::read(const std::string& text) {
   if (!name_node) error(root, "missing required key 'name', expected a label for the species");
   species.name = name(*name_node);
   species.origin = at(root);
+  for (const auto& [key, entry] : e) species.key_locations[key] = at(entry.key);
   if (find(e, "conformers")) {
     ensemble(e, species);
     if (const YAML::Node* h = find(e, "enthalpy_of_formation"))
@@ -550,7 +551,7 @@ std::vector<HinderedRotor> YamlReader::hindered_rotors(const YAML::Node& node, c
     if (!barrier && !scan)
       error(item, which + " has neither 'barrier' nor 'scan', expected a barrier in kJ/mol or a scan");
     if (barrier) {
-      const double V = number(*barrier, which + " 'barrier'");
+      const double V = energy_J_per_mol(*barrier, which + " 'barrier'") / 1e3;
       if (V < 0.0)
         error(*barrier, which + " 'barrier' is " + quote(barrier->Scalar()) +
                             ", expected a barrier height >= 0 in kJ/mol");

@@ -43,9 +43,10 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
   int drop_index = -1;
   if (ts) {
     if (imaginary.empty())
-      fail(p.species.origin, fmt::format("species '{}' is marked as a transition state but has no imaginary "
-                                         "frequency (expected one negative wavenumber)",
-                                         p.species.name));
+      fail(key_location(p.species, "transition_state"),
+           fmt::format("species '{}' is marked as a transition state but has no imaginary "
+                       "frequency (expected one negative wavenumber)",
+                       p.species.name));
     // The reaction coordinate is the imaginary mode of largest magnitude.
     auto it = std::min_element(scaled.begin(), scaled.end());
     drop_index = static_cast<int>(it - scaled.begin());
@@ -75,13 +76,22 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
     } else if (v < 0.0) {
       rejected.push_back(v);
     } else {
-      fail(p.species.origin, fmt::format("species '{}' has a zero frequency (mode {}); expected only the "
-                                         "vibrations, without translations and rotations",
-                                         p.species.name, i + 1));
+      fail(key_location(p.species, "frequencies"),
+           fmt::format("species '{}' has a zero frequency (mode {}); expected only the "
+                       "vibrations, without translations and rotations",
+                       p.species.name, i + 1));
     }
   }
+  if (!rejected.empty() && ts)
+    fail(key_location(p.species, "frequencies"),
+         fmt::format(
+             "species '{}' is a transition state with {} imaginary frequencies ({}, {} cm^-1); expected "
+             "exactly one, the reaction coordinate (re-optimise the structure, or treat small ones as "
+             "real with --imaginary-as-real-below)",
+             p.species.name, rejected.size() + 1, join_wavenumbers({scaled[static_cast<size_t>(drop_index)]}),
+             join_wavenumbers(rejected)));
   if (!rejected.empty())
-    fail(p.species.origin,
+    fail(key_location(p.species, "frequencies"),
          fmt::format("species '{}' has imaginary frequencies {} cm^-1; expected real ones (mark a transition "
                      "state with 'transition_state: true', or treat small ones as real with "
                      "--imaginary-as-real-below)",
@@ -335,7 +345,7 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
   if (p.is_gas && !(options.pressure_Pa > 0.0 && std::isfinite(options.pressure_Pa)))
     fail({}, fmt::format("pressure must be positive, got {} Pa", options.pressure_Pa));
   if (species.symmetry_number < 1)
-    fail(species.origin,
+    fail(key_location(species, "symmetry_number"),
          fmt::format("symmetry number must be a positive integer, got {}", species.symmetry_number));
   p.rotor = analyse_rotor(species, options.linear_tolerance_amu_A2);
   if (species.hessian_J_per_m2) frequencies_from_hessian(p);
@@ -353,7 +363,8 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
         fmt::format("species '{}' has {} vibrational frequencies, expected {} ({}, N = {})", species.name,
                     given, expected, count_rule(species, p.rotor.type), atom_count(species));
     if (!options.mode_count_mismatch_is_warning)
-      fail(species.origin, message + "; --allow-mode-count-mismatch accepts it");
+      fail(key_location(species, species.hessian_J_per_m2 ? "hessian" : "frequencies"),
+           message + "; --allow-mode-count-mismatch accepts it");
     p.warnings.push_back(message);
   }
   apply_imaginary_policy(p, scaled);

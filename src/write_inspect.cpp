@@ -44,13 +44,16 @@ std::string inspect_text(const std::vector<SpeciesFacts>& all) {
                      f.molar_mass_g_per_mol > 0
                          ? fmt::format(", {:.4f} g/mol (standard atomic weights)", f.molar_mass_g_per_mol)
                          : std::string()));
-    line("rotor", rotor_type_name(f.rotor));
-    line("moments", fmt::format("{:.5f}  {:.5f}  {:.5f} amu A^2", f.moments_amu_A2[0], f.moments_amu_A2[1],
-                                f.moments_amu_A2[2]));
-    line("rot. constants", numbers(f.rotational_constants_cm1, "{:.5f}") + " cm^-1");
-    line("", numbers(f.rotational_constants_GHz, "{:.4f}") + " GHz");
-    line("rot. temperatures", numbers(f.rotational_temperatures_K, "{:.4f}") + " K");
-    line("symmetry number", std::to_string(f.symmetry_number));
+    // An adsorbate neither translates nor rotates: its rotor facts would mean nothing.
+    if (f.phase != "adsorbate") {
+      line("rotor", rotor_type_name(f.rotor));
+      line("moments", fmt::format("{:.5f}  {:.5f}  {:.5f} amu A^2", f.moments_amu_A2[0], f.moments_amu_A2[1],
+                                  f.moments_amu_A2[2]));
+      line("rot. constants", numbers(f.rotational_constants_cm1, "{:.5f}") + " cm^-1");
+      line("", numbers(f.rotational_constants_GHz, "{:.4f}") + " GHz");
+      line("rot. temperatures", numbers(f.rotational_temperatures_K, "{:.4f}") + " K");
+      line("symmetry number", std::to_string(f.symmetry_number));
+    }
     line("ground degeneracy", std::to_string(f.ground_degeneracy));
     line("modes", fmt::format("{} given, {} expected for N = {}, {} imaginary", f.given_modes,
                               f.expected_modes, f.atom_count, f.imaginary_modes));

@@ -76,7 +76,10 @@ struct Conformer;
 
 struct Species {
   std::string name;
-  SourceLocation origin;    // file the species came from
+  SourceLocation origin;  // file the species came from
+  // Where each top-level key was given (YAML), so checks made after reading point at the key
+  // at fault; key_location() falls back to `origin`.
+  std::map<std::string, SourceLocation> key_locations;
   std::vector<Atom> atoms;  // empty when `rotor_data` is used
   std::optional<RigidRotorData> rotor_data;
   std::map<std::string, int> formula;   // element -> count; from atoms or `formula`
@@ -106,5 +109,10 @@ struct Conformer {
   Species species;                         // read from `file`
   double relative_energy_J_per_mol = 0.0;  // electronic (or ZPE-inclusive), relative to the lowest
 };
+
+inline SourceLocation key_location(const Species& species, const std::string& key) {
+  const auto it = species.key_locations.find(key);
+  return it == species.key_locations.end() ? species.origin : it->second;
+}
 
 }  // namespace vibtherm
