@@ -49,6 +49,7 @@ struct ModeConstants {
   // The low-frequency treatment (low_frequency.hpp) that changes this mode, "" when none;
   // the activation temperatures above are those of the harmonic oscillator.
   std::string treatment;
+  int vibration = 0;          // 0-based position in PreparedSpecies::vibrations_cm1
   double qrrho_weight = 1.0;  // under qrrho: w(ν̃)
   double floor_cm1 = 0.0;     // under floor: the wavenumber used for S, Cp and H
 };
