@@ -557,13 +557,30 @@ std::vector<HinderedRotor> YamlReader::hindered_rotors(const YAML::Node& node, c
                             ", expected a barrier height >= 0 in kJ/mol");
       r.barrier_J_per_mol = V * 1e3;
     } else {
-      if (!scan->IsSequence())
+      // {value: [[degrees, E], ...], unit: U} gives the energies in another unit.
+      YAML::Node points = *scan;
+      double J_per_unit = 1e3;
+      if (scan->IsMap()) {
+        Entries se = entries(*scan, which + " 'scan'", {"value", "values", "unit"});
+        const YAML::Node* list = find(se, "value") ? find(se, "value") : find(se, "values");
+        if (!list)
+          error(*scan, which + " 'scan' has no 'value', expected {value: [[degrees, E], ...], unit: U}");
+        points = *list;
+        if (const YAML::Node* unit = find(se, "unit")) {
+          const std::string u = text(*unit, "'unit'");
+          const std::optional<double> factor = to_energy_J_per_mol(1.0, u);
+          if (!factor)
+            error(*unit, "unknown energy unit " + quote(u) + ", expected one of " + energy_units_list());
+          J_per_unit = *factor;
+        }
+      }
+      if (!points.IsSequence())
         error(*scan, which + " 'scan' is " + describe(*scan) + ", expected a list of [degrees, kJ/mol]");
-      for (const YAML::Node& point : *scan) {
+      for (const YAML::Node& point : points) {
         if (!point.IsSequence() || point.size() != 2)
           error(point, which + " scan point is " + describe(point) + ", expected [degrees, kJ/mol]");
         r.scan.push_back(
-            {number(point[0], which + " scan angle"), number(point[1], which + " scan energy") * 1e3});
+            {number(point[0], which + " scan angle"), number(point[1], which + " scan energy") * J_per_unit});
       }
     }
     if (const YAML::Node* top = find(e, "top")) {

@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <array>
 #include <nlohmann/json.hpp>
+#include <string_view>
 
 #include "vibtherm/constants.hpp"
 
@@ -21,11 +22,13 @@ struct MotionRef {
 constexpr std::array<MotionRef, 5> motions{{{"translation", &ThermoPoint::translation},
                                             {"rotation", &ThermoPoint::rotation},
                                             {"vibration", &ThermoPoint::vibration},
-                                            {"internal_rotation", &ThermoPoint::internal_rotation},
+                                            {"hindered_rotors", &ThermoPoint::internal_rotation},
                                             {"electronic", &ThermoPoint::electronic}}};
 
-// Short labels for the text breakdown columns.
-constexpr std::array<const char*, 5> motion_tags{"trans", "rot", "vib", "hrot", "elec"};
+// Text breakdown columns carry the motion's name, as in CSV and JSON ("Cp.hindered_rotors").
+std::size_t column_width(const MotionRef& m) {
+  return std::max<std::size_t>(8, 3 + std::string_view(m.name).size());
+}
 
 }  // namespace
 
@@ -48,9 +51,11 @@ std::string text_piece(const SpeciesTable& table, const TableWriteOptions& optio
     head += fmt::format(" {:>10} {:>11}", "G-H298", "-(G-H298)/T");
     units += fmt::format(" {:>10} {:>11}", "kJ/mol", "J/mol/K");
     if (breakdown) {
-      for (const char* tag : motion_tags) {
-        head += fmt::format(" {:>8} {:>8}", fmt::format("Cp.{}", tag), fmt::format("S.{}", tag));
-        units += fmt::format(" {:>8} {:>8}", "J/mol/K", "J/mol/K");
+      for (const auto& m : motions) {
+        const std::size_t w = column_width(m);
+        head +=
+            fmt::format(" {:>{}} {:>{}}", fmt::format("Cp.{}", m.name), w, fmt::format("S.{}", m.name), w);
+        units += fmt::format(" {:>{}} {:>{}}", "J/mol/K", w, "J/mol/K", w);
       }
     }
     const bool kappa = table.tunnelling.size() == table.rows.size() && !table.rows.empty();
@@ -75,7 +80,8 @@ std::string text_piece(const SpeciesTable& table, const TableWriteOptions& optio
           fmt::format(" {:>10.3f} {:>11.3f}", r.G_minus_H298_J_per_mol / 1e3, r.gibbs_function_J_per_mol_K);
       if (breakdown)
         for (const auto& m : motions)
-          line += fmt::format(" {:>8.3f} {:>8.3f}", (r.*m.terms).Cp_over_R * R, (r.*m.terms).S_over_R * R);
+          line += fmt::format(" {:>{}.3f} {:>{}.3f}", (r.*m.terms).Cp_over_R * R, column_width(m),
+                              (r.*m.terms).S_over_R * R, column_width(m));
       if (kappa) {
         const TunnellingPoint& k = table.tunnelling[i];
         line += fmt::format(" {:>11.5g} {:>11}", k.wigner, k.eckart ? fmt::format("{:.5g}", *k.eckart) : "-");

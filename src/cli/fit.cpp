@@ -8,6 +8,7 @@
 
 #include "common.hpp"
 #include "vibtherm/checksum.hpp"
+#include "vibtherm/fit_advice.hpp"
 #include "vibtherm/fit_nasa.hpp"
 #include "vibtherm/fit_plan.hpp"
 #include "vibtherm/write_fit_json.hpp"
@@ -90,12 +91,16 @@ void setup_fit(CLI::App& sub) {
     OutputSet outputs;
     const std::size_t out = outputs.add(o->common.output);
     const FitPlan plan(fit);  // grid, basis and constraint factorisation shared by every species
+    const std::optional<FitPlan> searched = searched_breakpoint_plan(fit);  // for the Cp-warning advice
     const auto options_list = model_option_list(*o);
     std::vector<FitRecord> records;
     const BatchSummary batch = for_each_species<FitRecord>(
         o->common, paths,
         [&](const SpeciesInput& in, std::vector<LogLine>& log) {
           SpeciesFit f = fit_species(in.prepared, plan);
+          if (searched)
+            if (auto advice = searched_breakpoint_advice(in.prepared, f, *searched))
+              f.fit.warnings.push_back(*advice);
           // Check that the record fits its format now, so one bad name fails one species.
           if (o->form == "nasa7") write_nasa7_record(std::get<Nasa7>(f.polynomial));
           if (o->form == "nasa9") write_nasa9_record(std::get<Nasa9>(f.polynomial));

@@ -114,8 +114,8 @@ with tempfile.TemporaryDirectory() as tmp:
 ethane = os.path.join(root, "tests", "data", "ethane_rotor.yaml")
 r = run("table", ethane, "--temps", "150,298.15,1000", "--format", "json", "--breakdown")
 rows = json.loads(r.stdout)["species"][0]["rows"] if r.returncode == 0 else []
-check("hindered rotor: table breakdown has internal_rotation",
-      len(rows) == 3 and all("internal_rotation" in x.get("motions", {}) for x in rows), r.stderr)
+check("hindered rotor: table breakdown has hindered_rotors",
+      len(rows) == 3 and all("hindered_rotors" in x.get("motions", {}) for x in rows), r.stderr)
 r = run("modes", ethane, "--temps", "150,298.15,1000", "--format", "json")
 mspec = json.loads(r.stdout)["species"][0] if r.returncode == 0 else {}
 temps = mspec.get("temperatures", [])
