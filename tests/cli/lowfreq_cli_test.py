@@ -69,6 +69,13 @@ m0 = modes["species"][0]["vibrations"][0] if modes else {}
 c.check("modes JSON marks the 12 cm^-1 mode as changed by qrrho",
         m0.get("treatment") == "qrrho" and 0 < m0.get("qrrho_weight", 1) < 1e-3, m0)
 
+# fit JSON provenance records the factors and the treatment used.
+r = c.run("fit", soft, "--form", "json", "--allow-missing-hf")
+prov = json.loads(r.stdout)["species"][0]["provenance"]["model_options"] if r.returncode == 0 else {}
+c.check("fit JSON provenance has the scale factors and the treatment",
+        prov.get("scale_zpe") == "0.98" and prov.get("scale_enthalpy") == "0.99" and
+        prov.get("scale_entropy") == "1" and prov.get("low_frequency") == "qrrho", (prov, r.stderr))
+
 # --- tunnelling: Wigner and the symmetric Eckart barrier -----------------------------------
 h, cl, k, NA = 6.62607015e-34, 299792458.0, 1.380649e-23, 6.02214076e23  # CODATA 2018 exact
 
