@@ -58,8 +58,20 @@ std::string text_piece(const SpeciesTable& table, const TableWriteOptions& optio
         units += fmt::format(" {:>{}} {:>{}}", "J/mol/K", w, "J/mol/K", w);
       }
     }
+    const bool kappa = table.tunnelling.size() == table.rows.size() && !table.rows.empty();
+    if (kappa) {
+      head += fmt::format(" {:>11} {:>11}", "kappa.Wig", "kappa.Eck");
+      units += fmt::format(" {:>11} {:>11}", "1", "1");
+    }
+    const bool populations = table.populations.size() == table.rows.size() && !table.rows.empty();
+    if (populations)
+      for (std::size_t j = 0; j < table.conformer_files.size(); ++j) {
+        head += fmt::format(" {:>8}", fmt::format("pop.{}", j + 1));
+        units += fmt::format(" {:>8}", "1");
+      }
     out += head + '\n' + units + '\n';
-    for (const auto& r : table.rows) {
+    for (std::size_t i = 0; i < table.rows.size(); ++i) {
+      const auto& r = table.rows[i];
       std::string line = fmt::format("{:>9.2f} {:>9.3f}", r.T_K, r.Cp_J_per_mol_K);
       if (model) line += fmt::format(" {:>9.3f}", r.Cv_J_per_mol_K);
       line += fmt::format(" {:>9.3f} {:>10.3f}", r.S_J_per_mol_K, r.H_minus_H298_J_per_mol / 1e3);
@@ -70,8 +82,18 @@ std::string text_piece(const SpeciesTable& table, const TableWriteOptions& optio
         for (const auto& m : motions)
           line += fmt::format(" {:>{}.3f} {:>{}.3f}", (r.*m.terms).Cp_over_R * R, column_width(m),
                               (r.*m.terms).S_over_R * R, column_width(m));
+      if (kappa) {
+        const TunnellingPoint& k = table.tunnelling[i];
+        line += fmt::format(" {:>11.5g} {:>11}", k.wigner, k.eckart ? fmt::format("{:.5g}", *k.eckart) : "-");
+      }
+      if (populations)
+        for (double x : table.populations[i]) line += fmt::format(" {:>8.4f}", x);
       out += line + '\n';
     }
+    if (populations)
+      for (std::size_t j = 0; j < table.conformer_files.size(); ++j)
+        out +=
+            fmt::format("pop.{}: population of conformer {} ({})\n", j + 1, j + 1, table.conformer_files[j]);
   }
   return out;
 }
@@ -84,7 +106,9 @@ std::string csv_header(const TableWriteOptions& options) {
   if (breakdown)
     for (const auto& m : motions)
       out += fmt::format(",Cp_{0}_J_per_mol_K,S_{0}_J_per_mol_K,H_minus_H0_{0}_kJ_per_mol", m.name);
-  out += '\n';
+  // Tunnelling corrections of transition states; empty for other species (the header comes
+  // before the species are known).
+  out += ",kappa_wigner,kappa_eckart\n";
   return out;
 }
 
@@ -99,7 +123,8 @@ std::string csv_piece(const SpeciesTable& table, const TableWriteOptions& option
       for (char ch : name) quoted += ch == '"' ? std::string("\"\"") : std::string(1, ch);
       name = quoted + "\"";
     }
-    for (const auto& r : table.rows) {
+    for (std::size_t i = 0; i < table.rows.size(); ++i) {
+      const auto& r = table.rows[i];
       const bool model = table.has_model_columns;
       out += fmt::format("{},{},{:.6f},{},{:.6f},{:.6f},{},{:.6f},{:.6f}", name, r.T_K, r.Cp_J_per_mol_K,
                          model ? fmt::format("{:.6f}", r.Cv_J_per_mol_K) : "", r.S_J_per_mol_K,
@@ -113,6 +138,11 @@ std::string csv_piece(const SpeciesTable& table, const TableWriteOptions& option
                                      t.H_over_RT * R * r.T_K / 1e3)
                        : std::string(",,,");
         }
+      {
+        const TunnellingPoint* k = i < table.tunnelling.size() ? &table.tunnelling[i] : nullptr;
+        out += k ? fmt::format(",{:.8g},{}", k->wigner, k->eckart ? fmt::format("{:.8g}", *k->eckart) : "")
+                 : std::string(",,");
+      }
       out += '\n';
     }
   }
@@ -149,8 +179,11 @@ std::string json_piece(const SpeciesTable& table, const TableWriteOptions& optio
   {
     nlohmann::ordered_json entry;
     entry["name"] = table.name;
+    if (!table.notes.empty()) entry["notes"] = table.notes;
+    if (!table.conformer_files.empty()) entry["conformers"] = table.conformer_files;
     entry["rows"] = nlohmann::ordered_json::array();
-    for (const auto& r : table.rows) {
+    for (std::size_t i = 0; i < table.rows.size(); ++i) {
+      const auto& r = table.rows[i];
       nlohmann::ordered_json row;
       row["T"] = r.T_K;
       row["Cp"] = r.Cp_J_per_mol_K;
@@ -169,6 +202,19 @@ std::string json_piece(const SpeciesTable& table, const TableWriteOptions& optio
                                     {"H_minus_H0", t.H_over_RT * R * r.T_K / 1e3},
                                     {"ln_q", t.ln_q}};
         }
+        if (!table.conformer_files.empty()) {
+          const MotionTerms& t = r.conformers;
+          row["motions"]["conformers"] = {{"Cp", t.Cp_over_R * R},
+                                          {"Cv", t.Cv_over_R * R},
+                                          {"S", t.S_over_R * R},
+                                          {"H_minus_H0", t.H_over_RT * R * r.T_K / 1e3},
+                                          {"ln_q", t.ln_q}};
+        }
+      }
+      if (i < table.populations.size()) row["populations"] = table.populations[i];
+      if (i < table.tunnelling.size()) {
+        row["kappa_wigner"] = table.tunnelling[i].wigner;
+        if (table.tunnelling[i].eckart) row["kappa_eckart"] = *table.tunnelling[i].eckart;
       }
       entry["rows"].push_back(row);
     }

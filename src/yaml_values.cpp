@@ -226,4 +226,17 @@ double YamlValues::energy_J_per_mol(const YAML::Node& node, const std::string& w
   return number(node, what) * 1e3;  // bare number: kJ/mol (design.md section 4)
 }
 
+ScaleFactors YamlValues::scale_factors(const YAML::Node& node, const std::string& what) const {
+  if (!node.IsMap())
+    error(node, what + " is " + describe(node) +
+                    ", expected a map such as {zpe: 0.98, enthalpy: 0.99, entropy: 1.0}");
+  const Entries e = entries(node, what, {"zpe", "enthalpy", "entropy"});
+  ScaleFactors f;
+  if (const YAML::Node* v = find(e, "zpe")) f.zpe = positive_number(*v, what + " 'zpe'");
+  if (const YAML::Node* v = find(e, "enthalpy")) f.enthalpy = positive_number(*v, what + " 'enthalpy'");
+  if (const YAML::Node* v = find(e, "entropy")) f.entropy = positive_number(*v, what + " 'entropy'");
+  if (f.empty()) error(node, what + " is empty, expected at least one of zpe, enthalpy, entropy");
+  return f;
+}
+
 }  // namespace vibtherm

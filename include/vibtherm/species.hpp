@@ -15,6 +15,19 @@ namespace vibtherm {
 
 enum class Phase { gas, adsorbate };
 
+// Treatment of low-frequency vibrations (low_frequency.hpp): harmonic oscillators,
+// Grimme's quasi-rigid-rotor-harmonic-oscillator interpolation, or a wavenumber floor.
+enum class LowFrequencyMethod { harmonic, qrrho, floor };
+
+// Frequency scale factors per quantity, as given (input key `scale`, or a method file);
+// an absent factor falls back to the one-for-all --scale.
+struct ScaleFactors {
+  std::optional<double> zpe;       // zero-point energy
+  std::optional<double> enthalpy;  // thermal enthalpy H(T) - H(0)
+  std::optional<double> entropy;   // entropy and heat capacity
+  bool empty() const { return !zpe && !enthalpy && !entropy; }
+};
+
 struct Atom {
   std::string symbol;     // element symbol, e.g. "C"
   std::string isotope;    // isotope label as given ("D", "C13"); empty = most abundant
@@ -45,12 +58,21 @@ struct HinderedRotor {
   double replaces_cm1 = 0.0;                // wavenumber of the torsional mode replaced
 };
 
+// Barrier heights of a transition state for the Eckart tunnelling correction (tunnelling.hpp).
+struct TunnellingBarriers {
+  SourceLocation where;
+  double forward_J_per_mol = 0.0;  // from the reactant side
+  double reverse_J_per_mol = 0.0;  // from the product side
+};
+
 // Alternative to atoms: the rigid-rotor data given directly.
 struct RigidRotorData {
   double mass_amu = 0.0;
   std::vector<double> moments_amu_A2;  // 1 value (linear) or 3; empty for an atom
   bool linear = false;
 };
+
+struct Conformer;
 
 struct Species {
   std::string name;
@@ -75,6 +97,20 @@ struct Species {
   std::string surface_site;
   bool transition_state = false;
   std::vector<HinderedRotor> hindered_rotors;
+  std::optional<LowFrequencyMethod> low_frequency;  // input key; --low-freq overrides
+  ScaleFactors scale;                               // input key `scale`
+  std::optional<TunnellingBarriers> tunnelling;     // input key `tunnelling` (transition states)
+  // A Boltzmann ensemble of conformers instead of one structure (conformers.hpp); each
+  // brings its own geometry, symmetry number, frequencies and zero-point energy.
+  std::vector<Conformer> conformers;
+  bool conformer_energies_include_zpe = false;  // `conformer_energies: zero_point_inclusive`
+};
+
+struct Conformer {
+  SourceLocation where;                    // the entry in the ensemble's file
+  std::string file;                        // as written (relative to the ensemble's file)
+  Species species;                         // read from `file`
+  double relative_energy_J_per_mol = 0.0;  // electronic (or ZPE-inclusive), relative to the lowest
 };
 
 inline SourceLocation key_location(const Species& species, const std::string& key) {

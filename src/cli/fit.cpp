@@ -105,7 +105,17 @@ void setup_fit(CLI::App& sub) {
           if (o->form == "nasa7") write_nasa7_record(std::get<Nasa7>(f.polynomial));
           if (o->form == "nasa9") write_nasa9_record(std::get<Nasa9>(f.polynomial));
           log_fit(f, log);
-          return FitRecord{std::move(f), {in.path, sha256_hex(in.bytes), options_list}};
+          // The factors and the treatment this species used (options, its file's keys, --scale).
+          auto species_options = options_list;
+          const PreparedSpecies& p = in.prepared;
+          species_options.push_back({"scale_zpe", fmt::format("{:g}", p.scale.zpe)});
+          species_options.push_back({"scale_enthalpy", fmt::format("{:g}", p.scale.enthalpy)});
+          species_options.push_back({"scale_entropy", fmt::format("{:g}", p.scale.entropy)});
+          species_options.push_back(
+              {"low_frequency", low_frequency_method_name(p.vibration_adjustment.options.method)});
+          if (!p.conformers.empty())
+            species_options.push_back({"conformers", fmt::format("{}", p.conformers.size())});
+          return FitRecord{std::move(f), {in.path, sha256_hex(in.bytes), std::move(species_options)}};
         },
         [&](FitRecord& r) { records.push_back(std::move(r)); });
     const std::vector<std::string> header = {
