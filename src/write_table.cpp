@@ -6,6 +6,7 @@
 #include <nlohmann/json.hpp>
 
 #include "vibtherm/constants.hpp"
+#include "vibtherm/markup.hpp"
 
 namespace vibtherm {
 
@@ -85,13 +86,7 @@ std::string csv_piece(const SpeciesTable& table, const TableWriteOptions& option
   const bool breakdown = options.breakdown;
   std::string out;
   {
-    // Names are quoted when they hold a comma or quote (RFC 4180).
-    std::string name = table.name;
-    if (name.find_first_of(",\"\n") != std::string::npos) {
-      std::string quoted = "\"";
-      for (char ch : name) quoted += ch == '"' ? std::string("\"\"") : std::string(1, ch);
-      name = quoted + "\"";
-    }
+    const std::string name = csv_field(table.name);  // RFC 4180
     for (const auto& r : table.rows) {
       const bool model = table.has_model_columns;
       out += fmt::format("{},{},{:.6f},{},{:.6f},{:.6f},{},{:.6f},{:.6f}", name, r.T_K, r.Cp_J_per_mol_K,

@@ -41,6 +41,9 @@ struct PreparedSpecies {
   std::vector<std::string> notes;            // model choices worth stating
 };
 
+// Refuses options outside limits.hpp (scale factor, pressure, imaginary threshold).
+void check_model_options(const ModelOptions& options);
+
 // Validates and prepares. Throws InputError (located at the species file) for imaginary
 // frequencies not allowed by the options and for a wrong mode count unless downgraded.
 PreparedSpecies prepare_species(const Species& species, const ModelOptions& options = {});
