@@ -100,10 +100,18 @@ ModesReport analyse_modes(const PreparedSpecies& prepared, const std::vector<dou
   const double x_active = einstein_x_at(thresholds.active_above_Cv_over_R);
   double sum_cm1 = 0.0;
   for (double v : prepared.vibrations_cm1) sum_cm1 += v;
-  for (size_t i = 0; i < prepared.vibrations_cm1.size(); ++i) {
+  // Input positions: each vibration is the first unclaimed wavenumber of the reported list
+  // with its value (a treated-as-real imaginary mode is listed with its real value).
+  std::vector<char> claimed(prepared.used_frequencies_cm1.size(), 0);
+  for (double v : prepared.vibrations_cm1) {
     ModeConstants m;
-    m.index = static_cast<int>(i) + 1;
-    m.wavenumber_cm1 = prepared.vibrations_cm1[i];
+    for (size_t j = 0; j < claimed.size(); ++j)
+      if (!claimed[j] && prepared.used_frequencies_cm1[j] == v) {
+        claimed[j] = 1;
+        m.input_position = static_cast<int>(j) + 1;
+        break;
+      }
+    m.wavenumber_cm1 = v;
     m.theta_K = characteristic_temperature_K(m.wavenumber_cm1);
     // Zero-point energy of a harmonic oscillator, h c ν̃ / 2 per molecule (common practice).
     m.zero_point_energy_J_per_mol = 0.5 * m.wavenumber_cm1 * constants::wavenumber_J_per_mol;
@@ -112,6 +120,17 @@ ModesReport analyse_modes(const PreparedSpecies& prepared, const std::vector<dou
     m.half_active_at_K = m.theta_K / x_half;
     m.active_at_K = m.theta_K / x_active;
     report.modes.push_back(m);
+  }
+  std::stable_sort(
+      report.modes.begin(), report.modes.end(),
+      [](const ModeConstants& a, const ModeConstants& b) { return a.wavenumber_cm1 < b.wavenumber_cm1; });
+  for (size_t i = 0; i < report.modes.size(); ++i) report.modes[i].index = static_cast<int>(i) + 1;
+  for (size_t i = 0; i < prepared.hindered_rotors.size(); ++i) {
+    const HinderedRotor& in = prepared.hindered_rotors[i].input;
+    report.rotors.push_back({static_cast<int>(i) + 1,
+                             {in.bond_atoms[0] + 1, in.bond_atoms[1] + 1},
+                             in.symmetry,
+                             in.replaces_cm1});
   }
 
   report.points.reserve(temperatures_K.size());
@@ -132,6 +151,8 @@ ModesReport analyse_modes(const PreparedSpecies& prepared, const std::vector<dou
       const double share = harmonic_oscillator_terms(m.wavenumber_cm1, T).Cv_over_R;
       point.modes.push_back({share, classify_mode(share, thresholds)});
     }
+    for (const HinderedRotorModel& r : prepared.hindered_rotors)
+      point.rotors_Cv_over_R.push_back(hindered_rotor_terms(r.levels, r.input.symmetry, T).Cv_over_R);
     report.points.push_back(std::move(point));
   }
   return report;

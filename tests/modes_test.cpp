@@ -107,9 +107,13 @@ TEST_CASE("mode constants") {
   }
   CHECK(zpe == doctest::Approx(p.zero_point_energy_J_per_mol).epsilon(1e-14));
   CHECK(share == doctest::Approx(1.0).epsilon(1e-15));
-  // Modes keep the input order (index 1 = first wavenumber given).
+  // Modes are numbered by ascending wavenumber; the input position is kept beside.
   CHECK(report.modes[0].index == 1);
-  CHECK(report.modes[0].wavenumber_cm1 == 3657.0);
+  CHECK(report.modes[0].wavenumber_cm1 == 1595.0);
+  CHECK(report.modes[0].input_position == 2);
+  CHECK(report.modes[1].wavenumber_cm1 == 3657.0);
+  CHECK(report.modes[1].input_position == 1);
+  CHECK(report.modes[2].input_position == 3);
   CHECK(report.points.empty());
 }
 
@@ -226,7 +230,8 @@ TEST_CASE("adsorbate: all 3N motions vibrate, Dulong–Petit limit") {
   // At 20 K only the softest frustrated motion (60 cm^-1, θ ≈ 86 K, Cv/R ≈ 0.26) stirs.
   CHECK(r.points[0].count(ModeState::frozen) == 3 * N - 1);
   CHECK(r.points[0].count(ModeState::partial) == 1);
-  CHECK(r.points[0].modes[8].state == ModeState::partial);
+  CHECK(r.modes[0].wavenumber_cm1 == 60.0);  // ascending order
+  CHECK(r.points[0].modes[0].state == ModeState::partial);
 }
 
 TEST_CASE("per-motion values agree with the engine") {

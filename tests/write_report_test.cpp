@@ -4,7 +4,9 @@
 
 #include <string>
 
+#include "svg_layout.hpp"
 #include "test_species.hpp"
+#include "vibtherm/write_thermo_svg.hpp"
 
 using namespace vibtherm;
 
@@ -23,7 +25,7 @@ ReportOptions options() {
   return o;
 }
 
-ReportHeader header() { return {"9.9.9", {"model <line> & more"}}; }
+ReportHeader header() { return {"9.9.9", {"model <line> & more"}, {{"--scale", "1"}}}; }
 
 }  // namespace
 
@@ -57,16 +59,19 @@ TEST_CASE("page structure: one section per species, caution, inline pictures, no
   CHECK(html.find("id=\"species-2\"") != std::string::npos);
   CHECK(html.find("Verify the values against evaluated data") != std::string::npos);
   CHECK(html.find("licensed engineering practice") != std::string::npos);
-  // Two pictures per species: Cp(T) and the modes picture, both inline.
-  CHECK(count_of(html, "<svg") == 4);
-  CHECK(count_of(html, "</svg>") == 4);
+  // Four pictures per species: Cp, S, H − H(298.15) with residual panels, and the modes picture.
+  CHECK(count_of(html, "<svg") == 8);
+  CHECK(count_of(html, "</svg>") == 8);
+  CHECK(count_of(html, "class=\"residual\"") == 6);
   CHECK(count_of(html, "<pre class=\"nasa7\">") == 2);
   CHECK(html.find("<?xml") == std::string::npos);
-  CHECK(html.find("<script") == std::string::npos);
+  // One inline script (index sorting), nothing loaded from elsewhere.
+  CHECK(count_of(html, "<script") == 1);
+  CHECK(html.find("<script src") == std::string::npos);
   CHECK(html.find("http") == std::string::npos);
   // The modes pictures keep distinct gradient ids on one page.
-  CHECK(html.find("id=\"s1-activation-ramp\"") != std::string::npos);
-  CHECK(html.find("id=\"s2-activation-ramp\"") != std::string::npos);
+  CHECK(html.find("id=\"s1-ramp\"") != std::string::npos);
+  CHECK(html.find("id=\"s2-ramp\"") != std::string::npos);
   CHECK(html.find("9.9.9") != std::string::npos);
 }
 
@@ -79,28 +84,56 @@ TEST_CASE("a species without enthalpy of formation is reported, its NASA part no
   const ReportSpecies r = gather_report_species(prepare_species(s), o);
   CHECK_FALSE(r.fit.has_value());
   CHECK_FALSE(r.not_fitted_reason.empty());
-  for (const auto& p : r.Cp_curve) CHECK_FALSE(p.fitted_Cp_J_per_mol_K.has_value());
+  for (const auto& p : r.curve) CHECK_FALSE(p.fitted.has_value());
   const auto html = write_report_html({r}, header());
   CHECK(html.find("Not fitted:") != std::string::npos);
   CHECK(html.find("<pre class=\"nasa7\">") == std::string::npos);
   CHECK(html.find("class=\"fitted\"") == std::string::npos);
 }
 
-TEST_CASE("Cp picture: engine and fitted curves, classical line, labelled axes on either scale") {
+TEST_CASE("thermo pictures: engine, fitted and residual curves with thresholds, on either scale") {
   const ReportSpecies r = gather_report_species(prepare_species(test::water()), options());
   // Water is nonlinear with 3 vibrations: classical Cv/R = 3/2 + 3/2 + 3, Cp = Cv + R
   // (equipartition, common practice).
   CHECK(r.classical_Cp_J_per_mol_K == doctest::Approx(7.0 * constants::gas_constant_J_per_mol_K));
-  for (TemperatureAxis axis : {TemperatureAxis::log, TemperatureAxis::linear}) {
-    const auto svg = Cp_curve_svg(r, axis);
-    CHECK(svg.find("class=\"engine\"") != std::string::npos);
-    CHECK(svg.find("class=\"fitted\"") != std::string::npos);
-    CHECK(svg.find("class=\"classical\"") != std::string::npos);
-    CHECK(svg.find("T / K") != std::string::npos);
-    CHECK(svg.find("Cp / (J mol⁻¹ K⁻¹)") != std::string::npos);
-    CHECK(svg.find(axis == TemperatureAxis::log ? "logarithmic" : "linear scale") != std::string::npos);
-  }
-  // The curve spans the fit range: 200 to 3000 K by default.
-  CHECK(r.Cp_curve.front().T_K == doctest::Approx(200.0));
-  CHECK(r.Cp_curve.back().T_K == doctest::Approx(3000.0));
+  for (const bool log : {true, false})
+    for (const ThermoQuantity q : {ThermoQuantity::Cp, ThermoQuantity::S, ThermoQuantity::H_minus_H298}) {
+      const auto svg = thermo_svg(r, q, log);
+      CHECK(svg.find("class=\"engine\"") != std::string::npos);
+      CHECK(svg.find("class=\"fitted\"") != std::string::npos);
+      CHECK(svg.find("class=\"residual\"") != std::string::npos);
+      CHECK(svg.find("warning threshold ±") != std::string::npos);
+      CHECK(svg.find(log ? "(logarithmic scale)" : "temperature T / K<") != std::string::npos);
+      const auto boxes = test::text_boxes(svg);
+      CHECK(test::overlaps(boxes).empty());
+      for (const auto& b : boxes) {
+        CHECK(b.font >= 12.0);
+        CHECK(b.x1 <= svg::figure_width);
+        CHECK(b.y1 <= test::svg_height(svg));
+      }
+    }
+  CHECK(thermo_svg(r, ThermoQuantity::Cp, true).find("±0.5 %") != std::string::npos);
+  CHECK(thermo_svg(r, ThermoQuantity::S, true).find("±0.1 J/(mol K)") != std::string::npos);
+  CHECK(thermo_svg(r, ThermoQuantity::H_minus_H298, true).find("±0.1 kJ/mol") != std::string::npos);
+  // Every picture spans the fit range widened to the requested temperatures: 200 to 3000 K,
+  // and the modes analysis uses the same samples, so the heat map lines up with the curves.
+  CHECK(r.curve.front().T_K == doctest::Approx(200.0));
+  CHECK(r.curve.back().T_K == doctest::Approx(3000.0));
+  CHECK(r.modes.points.front().T_K == r.curve.front().T_K);
+  CHECK(r.modes.points.back().T_K == r.curve.back().T_K);
+}
+
+TEST_CASE("index: warnings first, then the worst fit; rows link to their sections") {
+  ReportOptions o = options();
+  std::vector<ReportSpecies> species{gather_report_species(prepare_species(test::water()), o),
+                                     gather_report_species(prepare_species(test::oxygen()), o)};
+  species[0].worst_Cp_error = 0.001;
+  species[1].worst_Cp_error = 0.004;
+  CHECK(index_order(species) == std::vector<size_t>{1, 0});
+  species[0].warning_count = 1;
+  CHECK(index_order(species) == std::vector<size_t>{0, 1});
+  const auto html = write_report_html(species, header());
+  CHECK(html.find("<table id=\"index\"") != std::string::npos);
+  CHECK(html.find("<tr class=\"has-warnings\"><td><a href=\"#species-1\">") != std::string::npos);
+  CHECK(html.find("href=\"#species-2\"") != std::string::npos);
 }

@@ -3,6 +3,7 @@
 // the effective number of quadratic degrees of freedom F(T) = 2·Cv/R per motion.
 #pragma once
 
+#include <array>
 #include <string>
 #include <vector>
 
@@ -36,7 +37,8 @@ double einstein_x_at(double Cv_over_R);
 
 // Characteristic quantities of one vibration, independent of temperature.
 struct ModeConstants {
-  int index = 0;  // 1-based, in the order of PreparedSpecies::vibrations_cm1
+  int index = 0;           // 1-based, by ascending wavenumber (stable whatever rotors replace)
+  int input_position = 0;  // 1-based position in the input's frequency list; 0 when unknown
   double wavenumber_cm1 = 0.0;
   double theta_K = 0.0;                      // θ = h c ν̃ / k
   double zero_point_energy_J_per_mol = 0.0;  // h c ν̃ N_A / 2
@@ -62,10 +64,20 @@ struct ModeActivation {
   ModeState state = ModeState::frozen;
 };
 
+// A hindered rotor as a row beside the vibrations: it runs from 2 quadratic terms (a
+// torsional oscillator, Cv/R → 1) at low T to 1 (a free rotor, Cv/R → ½) at high T.
+struct RotorConstants {
+  int index = 0;              // 1-based, in input order
+  std::array<int, 2> bond{};  // 1-based atoms of the axis
+  int symmetry = 1;           // internal symmetry number
+  double replaces_cm1 = 0.0;  // the torsional mode it replaces
+};
+
 struct ModesPoint {
   double T_K = 0.0;
-  DegreesOfFreedom dof;               // from the engine's per-motion terms at T
-  std::vector<ModeActivation> modes;  // same order as ModesReport::modes
+  DegreesOfFreedom dof;                  // from the engine's per-motion terms at T
+  std::vector<ModeActivation> modes;     // same order as ModesReport::modes
+  std::vector<double> rotors_Cv_over_R;  // same order as ModesReport::rotors
   int count(ModeState state) const;
 };
 
@@ -74,8 +86,9 @@ struct ModesReport {
   bool is_gas = true;
   RotorType rotor = RotorType::atom;
   ActivationThresholds thresholds;
-  DegreesOfFreedom classical;  // equipartition limits; electronic is 0 (no classical limit)
-  std::vector<ModeConstants> modes;
+  DegreesOfFreedom classical;        // equipartition limits; electronic is 0 (no classical limit)
+  std::vector<ModeConstants> modes;  // ascending wavenumber
+  std::vector<RotorConstants> rotors;
   std::vector<ModesPoint> points;  // one per temperature, in the order given
 };
 

@@ -5,6 +5,7 @@
 
 #include "common.hpp"
 #include "vibtherm/write_modes.hpp"
+#include "vibtherm/write_modes_svg.hpp"
 
 namespace vibtherm::cli {
 

@@ -8,6 +8,7 @@
 #include <memory>
 
 #include "common.hpp"
+#include "vibtherm/checksum.hpp"
 #include "vibtherm/write_report.hpp"
 
 namespace vibtherm::cli {
@@ -64,6 +65,8 @@ void setup_report(CLI::App& sub) {
         o->common, paths,
         [&](const SpeciesInput& in, std::vector<LogLine>& log) {
           ReportSpecies r = gather_report_species(in.prepared, report);
+          r.input_file = in.path;
+          r.input_sha256 = sha256_hex(in.bytes);
           if (!r.fit)
             log.push_back(
                 {spdlog::level::warn, fmt::format("{}: {}", in.prepared.species.name, r.not_fitted_reason)});
@@ -81,7 +84,18 @@ void setup_report(CLI::App& sub) {
          fmt::format(
              "NASA-7 fit: {:g} to {:g} K, breakpoint {}; H(298.15 K) = ΔfH° from the input", bp.front(),
              bp.back(),
-             report.fit.range.auto_index >= 0 ? std::string("searched") : fmt::format("{:g} K", bp[1]))}};
+             report.fit.range.auto_index >= 0 ? std::string("searched") : fmt::format("{:g} K", bp[1]))},
+        {{"--temps", o->common.temps_text.empty() ? "default: 298.15, 500, 1000, 1500, 2000, 3000 K"
+                                                  : o->common.temps_text},
+         {"--range", o->range.empty() ? "default: 200:1000:3000" : o->range},
+         {"--standard-state", o->common.standard_state},
+         {"--pressure", o->common.pressure_text.empty() ? "the standard state" : o->common.pressure_text},
+         {"--scale", fmt::format("{:g}", o->common.frequency_scale)},
+         {"--transition-state", o->common.transition_state ? "on" : "off"},
+         {"--imaginary-as-real-below", fmt::format("{:g} cm⁻¹", o->common.imaginary_as_real_below_cm1)},
+         {"--allow-mode-count-mismatch", o->common.mode_count_warning ? "on" : "off"},
+         {"--allow-missing-hf", o->allow_missing_hf ? "on" : "off"},
+         {"--t-axis", o->axis}}};
     outputs.write(out,
                   write_report_html(species, header,
                                     {o->axis == "linear" ? TemperatureAxis::linear : TemperatureAxis::log}));

@@ -1,0 +1,112 @@
+#!/usr/bin/env python3
+"""Renders reports in headless Chromium: the demo report and a 60-mode species. Fails on any
+console message (our pages log nothing, so any message is an error), checks that the
+screenshots are not blank (pixel variance over every band of the page) and that the DOM after
+the script ran has every species section and the sortable index.
+
+Screenshots are kept in BUILD_DIR/screenshots/ for a person to look at.
+
+Usage: report_browser_test.py VIBTHERM_EXE PROJECT_ROOT BUILD_DIR
+"""
+import os
+import re
+import shutil
+import subprocess
+import sys
+import tempfile
+
+from PIL import Image, ImageStat
+
+exe, root, build = sys.argv[1], sys.argv[2], sys.argv[3]
+chromium = shutil.which("chromium") or "/usr/bin/chromium"
+failures = []
+
+
+def check(condition, message):
+    if not condition:
+        failures.append(message)
+
+
+def browser(args, page, tmp):
+    """Runs Chromium once with a fresh profile; returns (stdout, console lines)."""
+    profile = tempfile.mkdtemp(dir=tmp, prefix="profile-")
+    command = [chromium, "--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
+               "--disable-background-networking", "--disable-component-update", "--disable-sync",
+               "--hide-scrollbars", f"--user-data-dir={profile}", "--enable-logging=stderr", "--v=0"]
+    result = subprocess.run(command + args + ["file://" + page], capture_output=True, text=True, timeout=180)
+    console = [line for line in result.stderr.splitlines() if ":CONSOLE" in line]
+    return result.stdout, console
+
+
+def render(name, page, height, species_names, tmp):
+    shots = os.path.join(build, "screenshots")
+    os.makedirs(shots, exist_ok=True)
+    png = os.path.join(shots, f"{name}.png")
+    if os.path.exists(png):
+        os.remove(png)
+    _, console = browser([f"--window-size=1000,{height}", f"--screenshot={png}"], page, tmp)
+    check(not console, f"{name}: console messages: {console[:3]}")
+    dom, console = browser(["--dump-dom"], page, tmp)
+    check(not console, f"{name}: console messages while dumping the DOM: {console[:3]}")
+
+    # Every species has its section, and the index script ran (it marks the table sortable).
+    ids = re.findall(r'<section class="species" id="(species-\d+)">\s*<h2>([^<]*)</h2>', dom)
+    check([n for _, n in ids] == species_names, f"{name}: sections {[n for _, n in ids]}, expected {species_names}")
+    check(re.search(r'<table id="index" class="index sortable">', dom) is not None,
+          f"{name}: the index script did not run")
+
+    check(os.path.exists(png), f"{name}: no screenshot")
+    if not os.path.exists(png):
+        return
+    image = Image.open(png).convert("L")
+    width, full = image.size
+    # Content height: the last band with anything drawn; every 600 px band above it has ink.
+    bands = [(y, ImageStat.Stat(image.crop((0, y, width, min(full, y + 600)))).stddev[0])
+             for y in range(0, full, 600)]
+    inked = [y for y, sd in bands if sd > 4.0]
+    check(inked, f"{name}: the page is blank")
+    if inked:
+        blank = [y for y, sd in bands if y <= inked[-1] and sd <= 4.0]
+        check(not blank, f"{name}: blank bands at y = {blank}")
+        check(inked[-1] + 600 < full, f"{name}: the page is taller than the {full} px screenshot")
+        print(f"{name}: {png}, content to about {inked[-1] + 600} px, {len(inked)} inked bands")
+
+
+def species_names(args):
+    import json
+    result = subprocess.run([exe, "table"] + args + ["--temps", "298.15", "--format", "json", "-q"],
+                            capture_output=True, text=True, cwd=root)
+    return [s["name"] for s in json.loads(result.stdout)["species"]]
+
+
+if not os.path.exists(chromium):
+    print("FAIL: chromium is not installed (scripts/install-deps installs it)")
+    sys.exit(1)
+
+with tempfile.TemporaryDirectory() as tmp:
+    demo = os.path.join(tmp, "demo.html")
+    examples = os.path.join(root, "examples", "fuel-additive")
+    r = subprocess.run([exe, "report", examples, "-o", demo, "-q"], capture_output=True, text=True, cwd=root)
+    check(r.returncode == 0, f"demo report: exit {r.returncode}: {r.stderr}")
+    size = os.path.getsize(demo) if os.path.exists(demo) else 0
+    check(0 < size < 400_000, f"demo report is {size} bytes, expected under 400 kB")
+    print(f"demo report: {size} bytes")
+    render("demo-report", demo, 30000, species_names([examples]), tmp)
+
+    # A layout fixture, not a molecule: 22 atoms' worth (60 modes) of wavenumbers spread
+    # geometrically from 40 to 3600 cm^-1 on a rigid rotor given by its moments.
+    fixture = os.path.join(tmp, "layout-60.yaml")
+    wavenumbers = ", ".join(f"{40 * 90 ** (i / 59):.1f}" for i in range(60))
+    with open(fixture, "w", encoding="utf-8") as f:
+        f.write("name: layout-60\nformula: {C: 7, H: 14, O: 1}\nmass: 114.1\n"
+                "moments_of_inertia: [150.0, 600.0, 700.0]\nlinear: false\nsymmetry_number: 1\n"
+                f"enthalpy_of_formation: -250.0\nfrequencies: [{wavenumbers}]\n")
+    page = os.path.join(tmp, "layout-60.html")
+    r = subprocess.run([exe, "report", fixture, "-o", page, "-q"], capture_output=True, text=True)
+    check(r.returncode == 0, f"60-mode report: exit {r.returncode}: {r.stderr}")
+    render("layout-60-report", page, 8000, ["layout-60"], tmp)
+
+for f in failures:
+    print("FAIL:", f)
+print(f"{'ok' if not failures else 'FAILED'}: browser checks")
+sys.exit(1 if failures else 0)
