@@ -62,6 +62,24 @@ SpeciesFacts describe_species(const PreparedSpecies& p) {
   f.ground_degeneracy = ground;
   f.warnings = p.warnings;
   f.notes = p.notes;
+  if (!p.conformers.empty()) {
+    f.population_temperatures_K = {298.15, 500.0, 1000.0};
+    for (const ConformerMember& m : p.conformers)
+      f.conformers.push_back({m.file,
+                              m.relative_energy_J_per_mol,
+                              m.prepared.zero_point_energy_J_per_mol,
+                              m.level_J_per_mol,
+                              {}});
+    for (double T : f.population_temperatures_K) {
+      const std::vector<double> populations = conformer_populations(p, T);
+      for (std::size_t i = 0; i < populations.size(); ++i)
+        f.conformers[i].populations.push_back(populations[i]);
+    }
+  }
+  if (p.tunnelling) {
+    f.wigner_kappa_298 = wigner_kappa(p.tunnelling->imaginary_wavenumber_cm1, 298.15);
+    if (p.tunnelling->eckart) f.eckart_kappa_298 = eckart_kappa(*p.tunnelling->eckart, 298.15);
+  }
   return f;
 }
 

@@ -297,8 +297,9 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitPlan& plan) {
   const FitOptions& options = plan.options();
   const Species& sp = prepared.species;
   SpeciesFit out;
+  // The key is missing, so the error names the file, not a line of it.
   if (!sp.enthalpy_of_formation_J_per_mol && !options.allow_missing_hf)
-    fail(sp.origin,
+    fail({sp.origin.file, 0, 0},
          fmt::format("species '{}' has no enthalpy of formation, which a NASA polynomial needs "
                      "(H(298.15 K) = ΔfH°): add `enthalpy_of_formation: VALUE` (kJ/mol, or {{value, unit}}) "
                      "to the species file, or pass --allow-missing-hf to write H(298.15 K) = 0",

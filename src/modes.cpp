@@ -103,8 +103,10 @@ ModesReport analyse_modes(const PreparedSpecies& prepared, const std::vector<dou
   // Input positions: each vibration is the first unclaimed wavenumber of the reported list
   // with its value (a treated-as-real imaginary mode is listed with its real value).
   std::vector<char> claimed(prepared.used_frequencies_cm1.size(), 0);
-  for (double v : prepared.vibrations_cm1) {
+  for (size_t k = 0; k < prepared.vibrations_cm1.size(); ++k) {
+    const double v = prepared.vibrations_cm1[k];
     ModeConstants m;
+    m.vibration = static_cast<int>(k);
     for (size_t j = 0; j < claimed.size(); ++j)
       if (!claimed[j] && prepared.used_frequencies_cm1[j] == v) {
         claimed[j] = 1;
@@ -119,6 +121,11 @@ ModesReport analyse_modes(const PreparedSpecies& prepared, const std::vector<dou
     m.unfreezes_at_K = m.theta_K / x_unfreeze;
     m.half_active_at_K = m.theta_K / x_half;
     m.active_at_K = m.theta_K / x_active;
+    if (const AdjustedMode* a = prepared.vibration_adjustment.find(m.vibration); a && a->treated) {
+      m.treatment = low_frequency_method_name(prepared.vibration_adjustment.options.method);
+      m.qrrho_weight = a->qrrho_weight;
+      m.floor_cm1 = a->floor_cm1;
+    }
     report.modes.push_back(m);
   }
   std::stable_sort(
@@ -147,8 +154,11 @@ ModesReport analyse_modes(const PreparedSpecies& prepared, const std::vector<dou
         point.dof.translation + point.dof.rotation + point.dof.vibration + point.dof.hindered_rotors;
     point.modes.reserve(report.modes.size());
     for (const ModeConstants& m : report.modes) {
-      // The engine's own oscillator, so the modes add up to its vibrational term.
-      const double share = harmonic_oscillator_terms(m.wavenumber_cm1, T).Cv_over_R;
+      // The engine's own oscillator (or its low-frequency treatment, or the enthalpy-scaled
+      // mode), so the modes add up to its vibrational term.
+      const AdjustedMode* a = prepared.vibration_adjustment.find(m.vibration);
+      const double share = a ? adjusted_mode_terms(prepared.vibration_adjustment.options, *a, T).Cv_over_R
+                             : harmonic_oscillator_terms(m.wavenumber_cm1, T).Cv_over_R;
       point.modes.push_back({share, classify_mode(share, thresholds)});
     }
     for (const HinderedRotorModel& r : prepared.hindered_rotors)

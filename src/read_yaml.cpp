@@ -7,11 +7,13 @@
 
 #include <algorithm>
 #include <cmath>
+#include <filesystem>
 #include <set>
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/elements.hpp"
 #include "vibtherm/hindered_rotor.hpp"
+#include "vibtherm/read_species.hpp"
 #include "vibtherm/species_builder.hpp"
 #include "vibtherm/spelling.hpp"
 #include "vibtherm/units.hpp"
@@ -40,7 +42,16 @@ const std::vector<std::string> yaml_keys = {"name",
                                             "formula",
                                             "hindered_rotors",
                                             "hessian",
-                                            "hessian_unit"};
+                                            "hessian_unit",
+                                            "low_frequency",
+                                            "scale",
+                                            "tunnelling",
+                                            "conformers",
+                                            "conformer_energies"};
+
+// Keys an ensemble file may hold besides `conformers`: the rest comes from the conformers.
+const std::vector<std::string> ensemble_keys = {
+    "name", "conformers", "conformer_energies", "enthalpy_of_formation", "low_frequency", "scale"};
 
 // A full Hessian may differ from its transpose by this much, relative to its largest
 // element, and is then symmetrised: finite-difference Hessians and values printed to five
@@ -65,7 +76,67 @@ class YamlReader : public YamlValues {
                               std::size_t atom_count) const;
   std::vector<HinderedRotor> hindered_rotors(const YAML::Node& node, const Species& species) const;
   int atom_index(const YAML::Node& node, const std::string& what, std::size_t atom_count) const;
+  void ensemble(const Entries& e, Species& species) const;
+  void read_model_keys(const Entries& e, Species& species) const;
 };
+
+// The model keys a species file and an ensemble file share: low_frequency, scale.
+void YamlReader::read_model_keys(const Entries& e, Species& species) const {
+  if (const YAML::Node* l = find(e, "low_frequency")) {
+    const std::string method = YamlValues::text(*l, "'low_frequency'");
+    if (method == "harmonic")
+      species.low_frequency = LowFrequencyMethod::harmonic;
+    else if (method == "qrrho")
+      species.low_frequency = LowFrequencyMethod::qrrho;
+    else if (method == "floor")
+      species.low_frequency = LowFrequencyMethod::floor;
+    else
+      error(*l, "'low_frequency' is " + quote(method) + ", expected harmonic, qrrho or floor");
+  }
+  if (const YAML::Node* f = find(e, "scale")) species.scale = scale_factors(*f, "'scale'");
+}
+
+// Reads the conformer files of an ensemble (paths relative to this file), each a species
+// file of its own without `conformers`.
+void YamlReader::ensemble(const Entries& e, Species& species) const {
+  for (const auto& [key, entry] : e)
+    if (std::find(ensemble_keys.begin(), ensemble_keys.end(), key) == ensemble_keys.end())
+      error(entry.key, "key " + quote(key) + " cannot be combined with 'conformers' (each conformer file " +
+                           "gives its own structure and frequencies), expected only " + join(ensemble_keys));
+  const YAML::Node& list = *find(e, "conformers");
+  if (!list.IsSequence() || list.size() == 0)
+    error(list, "'conformers' is " + describe(list) +
+                    ", expected a list of {file, relative_energy} entries, one per conformer");
+  if (const YAML::Node* b = find(e, "conformer_energies")) {
+    const std::string basis = text(*b, "'conformer_energies'");
+    if (basis == "zero_point_inclusive")
+      species.conformer_energies_include_zpe = true;
+    else if (basis != "electronic")
+      error(*b, "'conformer_energies' is " + quote(basis) + ", expected electronic or zero_point_inclusive");
+  }
+  const std::filesystem::path here = std::filesystem::path(file()).parent_path();
+  for (std::size_t i = 0; i < list.size(); ++i) {
+    const std::string what = "conformer " + std::to_string(i + 1);
+    if (!list[i].IsMap())
+      error(list[i], what + " is " + describe(list[i]) + ", expected {file, relative_energy}");
+    const Entries ce = entries(list[i], what, {"file", "relative_energy"});
+    const YAML::Node* f = find(ce, "file");
+    const YAML::Node* energy = find(ce, "relative_energy");
+    if (!f || !energy)
+      error(list[i], what + " needs 'file' and 'relative_energy' (kJ/mol, relative to the lowest)");
+    Conformer c;
+    c.where = at(list[i]);
+    c.file = text(*f, what + " 'file'");
+    c.relative_energy_J_per_mol = energy_J_per_mol(*energy, what + " 'relative_energy'");
+    const std::string path = (here / c.file).string();
+    if (!std::filesystem::is_regular_file(path))
+      error(*f, what + " file " + quote(c.file) + " does not exist (paths are relative to this file)");
+    c.species = read_species_file(path);
+    if (!c.species.conformers.empty())
+      error(*f, what + " file " + quote(c.file) + " is itself an ensemble, expected one structure");
+    species.conformers.push_back(std::move(c));
+  }
+}
 
 std::string YamlReader::name(const YAML::Node& node) const {
   std::string s = text(node, "'name'");
@@ -278,6 +349,18 @@ Species YamlReader::read(const std::string& text) {
   if (!name_node) error(root, "missing required key 'name', expected a label for the species");
   species.name = name(*name_node);
   species.origin = at(root);
+  for (const auto& [key, entry] : e) species.key_locations[key] = at(entry.key);
+  if (find(e, "conformers")) {
+    ensemble(e, species);
+    if (const YAML::Node* h = find(e, "enthalpy_of_formation"))
+      species.enthalpy_of_formation_J_per_mol = energy_J_per_mol(*h, "'enthalpy_of_formation'");
+  } else if (const YAML::Node* b = find(e, "conformer_energies")) {
+    error(*b, "'conformer_energies' needs 'conformers', expected it only in an ensemble file");
+  }
+  if (find(e, "conformers")) {
+    read_model_keys(e, species);
+    return species;
+  }
 
   const YAML::Node* atoms_node = find(e, "atoms");
   const YAML::Node* mass_node = find(e, "mass");
@@ -399,6 +482,25 @@ Species YamlReader::read(const std::string& text) {
   }
   if (const YAML::Node* t = find(e, "transition_state"))
     species.transition_state = boolean(*t, "'transition_state'");
+  read_model_keys(e, species);
+  if (const YAML::Node* t = find(e, "tunnelling")) {
+    if (!t->IsMap())
+      error(*t, "'tunnelling' is " + describe(*t) + ", expected a map {forward_barrier, reverse_barrier}");
+    const Entries te = entries(*t, "'tunnelling'", {"forward_barrier", "reverse_barrier"});
+    const YAML::Node* forward = find(te, "forward_barrier");
+    const YAML::Node* reverse = find(te, "reverse_barrier");
+    if (!forward || !reverse)
+      error(*t,
+            "'tunnelling' needs both 'forward_barrier' and 'reverse_barrier' (energies above the reactants "
+            "and the products), expected e.g. {forward_barrier: 45.2, reverse_barrier: 80.1} in kJ/mol");
+    TunnellingBarriers b{at(*t), energy_J_per_mol(*forward, "'forward_barrier'"),
+                         energy_J_per_mol(*reverse, "'reverse_barrier'")};
+    if (!(b.forward_J_per_mol > 0.0))
+      error(*forward, "'forward_barrier' must be positive, expected the barrier above the reactants");
+    if (!(b.reverse_J_per_mol > 0.0))
+      error(*reverse, "'reverse_barrier' must be positive, expected the barrier above the products");
+    species.tunnelling = b;
+  }
   if (const YAML::Node* h = find(e, "hindered_rotors")) {
     if (species.atoms.empty())
       error(
@@ -449,19 +551,36 @@ std::vector<HinderedRotor> YamlReader::hindered_rotors(const YAML::Node& node, c
     if (!barrier && !scan)
       error(item, which + " has neither 'barrier' nor 'scan', expected a barrier in kJ/mol or a scan");
     if (barrier) {
-      const double V = number(*barrier, which + " 'barrier'");
+      const double V = energy_J_per_mol(*barrier, which + " 'barrier'") / 1e3;
       if (V < 0.0)
         error(*barrier, which + " 'barrier' is " + quote(barrier->Scalar()) +
                             ", expected a barrier height >= 0 in kJ/mol");
       r.barrier_J_per_mol = V * 1e3;
     } else {
-      if (!scan->IsSequence())
+      // {value: [[degrees, E], ...], unit: U} gives the energies in another unit.
+      YAML::Node points = *scan;
+      double J_per_unit = 1e3;
+      if (scan->IsMap()) {
+        Entries se = entries(*scan, which + " 'scan'", {"value", "values", "unit"});
+        const YAML::Node* list = find(se, "value") ? find(se, "value") : find(se, "values");
+        if (!list)
+          error(*scan, which + " 'scan' has no 'value', expected {value: [[degrees, E], ...], unit: U}");
+        points = *list;
+        if (const YAML::Node* unit = find(se, "unit")) {
+          const std::string u = text(*unit, "'unit'");
+          const std::optional<double> factor = to_energy_J_per_mol(1.0, u);
+          if (!factor)
+            error(*unit, "unknown energy unit " + quote(u) + ", expected one of " + energy_units_list());
+          J_per_unit = *factor;
+        }
+      }
+      if (!points.IsSequence())
         error(*scan, which + " 'scan' is " + describe(*scan) + ", expected a list of [degrees, kJ/mol]");
-      for (const YAML::Node& point : *scan) {
+      for (const YAML::Node& point : points) {
         if (!point.IsSequence() || point.size() != 2)
           error(point, which + " scan point is " + describe(point) + ", expected [degrees, kJ/mol]");
         r.scan.push_back(
-            {number(point[0], which + " scan angle"), number(point[1], which + " scan energy") * 1e3});
+            {number(point[0], which + " scan angle"), number(point[1], which + " scan energy") * J_per_unit});
       }
     }
     if (const YAML::Node* top = find(e, "top")) {

@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <cmath>
 
+#include "vibtherm/conformers.hpp"
 #include "vibtherm/hessian.hpp"
 #include "vibtherm/limits.hpp"
 
@@ -43,9 +44,10 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
   int drop_index = -1;
   if (ts) {
     if (imaginary.empty())
-      fail(p.species.origin, fmt::format("species '{}' is marked as a transition state but has no imaginary "
-                                         "frequency (expected one negative wavenumber)",
-                                         p.species.name));
+      fail(key_location(p.species, "transition_state"),
+           fmt::format("species '{}' is marked as a transition state but has no imaginary "
+                       "frequency (expected one negative wavenumber)",
+                       p.species.name));
     // The reaction coordinate is the imaginary mode of largest magnitude.
     auto it = std::min_element(scaled.begin(), scaled.end());
     drop_index = static_cast<int>(it - scaled.begin());
@@ -53,6 +55,12 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
         fmt::format("transition state: the imaginary mode {:.1f}i cm^-1 is the reaction "
                     "coordinate and is left out of the partition function",
                     std::abs(*it)));
+    p.tunnelling = TransitionStateTunnelling{std::abs(*it), std::nullopt};
+    if (const auto& b = p.species.tunnelling) {
+      p.tunnelling->eckart = EckartBarrier{b->forward_J_per_mol, b->reverse_J_per_mol, std::abs(*it)};
+      check_eckart_barrier(*p.tunnelling->eckart);
+    }
+    p.notes.push_back(tunnelling_note(*p.tunnelling));
   }
   std::vector<double> rejected;
   for (size_t i = 0; i < scaled.size(); ++i) {
@@ -69,13 +77,22 @@ void apply_imaginary_policy(PreparedSpecies& p, const std::vector<double>& scale
     } else if (v < 0.0) {
       rejected.push_back(v);
     } else {
-      fail(p.species.origin, fmt::format("species '{}' has a zero frequency (mode {}); expected only the "
-                                         "vibrations, without translations and rotations",
-                                         p.species.name, i + 1));
+      fail(key_location(p.species, "frequencies"),
+           fmt::format("species '{}' has a zero frequency (mode {}); expected only the "
+                       "vibrations, without translations and rotations",
+                       p.species.name, i + 1));
     }
   }
+  if (!rejected.empty() && ts)
+    fail(key_location(p.species, "frequencies"),
+         fmt::format(
+             "species '{}' is a transition state with {} imaginary frequencies ({}, {} cm^-1); expected "
+             "exactly one, the reaction coordinate (re-optimise the structure, or treat small ones as "
+             "real with --imaginary-as-real-below)",
+             p.species.name, rejected.size() + 1, join_wavenumbers({scaled[static_cast<size_t>(drop_index)]}),
+             join_wavenumbers(rejected)));
   if (!rejected.empty())
-    fail(p.species.origin,
+    fail(key_location(p.species, "frequencies"),
          fmt::format("species '{}' has imaginary frequencies {} cm^-1; expected real ones (mark a transition "
                      "state with 'transition_state: true', or treat small ones as real with "
                      "--imaginary-as-real-below)",
@@ -159,6 +176,19 @@ void replace_torsions(PreparedSpecies& p) {
   p.vibrations_cm1 = std::move(kept);
 }
 
+// Chooses the low-frequency treatment (option, else the species key, else harmonic) and
+// lists the modes it or a separate enthalpy scale factor changes.
+void plan_low_frequency(PreparedSpecies& p) {
+  LowFrequencyOptions lf = p.options.low_frequency;
+  lf.method =
+      p.options.low_frequency_method.value_or(p.species.low_frequency.value_or(LowFrequencyMethod::harmonic));
+  std::vector<double> enthalpy_cm1;
+  for (double v : p.vibrations_cm1) enthalpy_cm1.push_back(v * (p.scale.enthalpy / p.scale.entropy));
+  p.vibration_adjustment = plan_vibration_adjustment(lf, p.vibrations_cm1, enthalpy_cm1);
+  if (const std::string note = low_frequency_note(p.vibration_adjustment); !note.empty())
+    p.notes.push_back(note);
+}
+
 // The species' temperature-independent parts, fixed once per evaluation run: the
 // translation and rotation constants, the vibrations' characteristic temperatures and a
 // single-level electronic term. Per temperature that leaves one ln T, one exp per mode and
@@ -177,10 +207,23 @@ class Evaluator {
     const auto& levels = p.species.electronic_levels;
     single_level_ = levels.size() <= 1;
     if (single_level_) electronic_ = electronic_terms(levels, 1.0);  // ln g, the same at every T
+    for (const ConformerMember& m : p.conformers) {
+      members_.emplace_back(m.prepared);
+      levels_J_per_mol_.push_back(m.level_J_per_mol);
+    }
+  }
+
+  // An ensemble's thermal functions from its members' (conformers.hpp).
+  ThermoPoint ensemble_terms(double T_K, std::vector<double>* populations) const {
+    std::vector<ThermoPoint> points;
+    points.reserve(members_.size());
+    for (const Evaluator& m : members_) points.push_back(m.terms(T_K));
+    return combine_conformers(points, levels_J_per_mol_, T_K, populations);
   }
 
   // Thermal functions at T without the H(298.15) reference.
   ThermoPoint terms(double T_K) const {
+    if (!members_.empty()) return ensemble_terms(T_K, nullptr);
     ThermoPoint point;
     point.T_K = T_K;
     if (p_.is_gas) {
@@ -189,6 +232,9 @@ class Evaluator {
       point.rotation = rotation_.at(ln_T);
     }
     point.vibration = harmonic_oscillators_terms(theta_K_, T_K);
+    // The one hook of the low-frequency module: its correction to the harmonic sum.
+    if (!p_.vibration_adjustment.modes.empty())
+      point.vibration += vibration_adjustment_terms(p_.vibration_adjustment, T_K);
     point.electronic = single_level_ ? electronic_ : electronic_terms(p_.species.electronic_levels, T_K);
     for (const HinderedRotorModel& r : p_.hindered_rotors)
       point.internal_rotation += hindered_rotor_terms(r.levels, r.input.symmetry, T_K);
@@ -239,7 +285,70 @@ class Evaluator {
   std::vector<double> theta_K_;
   bool single_level_ = true;
   MotionTerms electronic_;
+  std::vector<Evaluator> members_;
+  std::vector<double> levels_J_per_mol_;
 };
+
+// An ensemble: every conformer prepared on its own (inheriting the ensemble's model keys
+// it does not set), placed at its zero-point level, then described by the lowest one.
+PreparedSpecies prepare_ensemble(const Species& species, const ModelOptions& options) {
+  std::vector<ConformerMember> members;
+  for (const Conformer& c : species.conformers) {
+    Species s = c.species;
+    if (!s.low_frequency) s.low_frequency = species.low_frequency;
+    if (s.scale.empty()) s.scale = species.scale;
+    ConformerMember m{c.file, prepare_species(s, options), c.relative_energy_J_per_mol, 0.0};
+    const PreparedSpecies& first = members.empty() ? m.prepared : members.front().prepared;
+    if (m.prepared.species.formula != first.species.formula || m.prepared.is_gas != first.is_gas)
+      fail(c.where, fmt::format("conformer {} ('{}') has another composition or phase than conformer 1, "
+                                "expected conformers of one species",
+                                members.size() + 1, c.file));
+    // Electronic energies: the zero-point level is ΔE + ZPE; ZPE-inclusive ones are that already.
+    m.level_J_per_mol =
+        c.relative_energy_J_per_mol +
+        (species.conformer_energies_include_zpe ? 0.0 : m.prepared.zero_point_energy_J_per_mol);
+    members.push_back(std::move(m));
+  }
+  std::size_t ground = 0;
+  for (std::size_t i = 0; i < members.size(); ++i)
+    if (members[i].level_J_per_mol < members[ground].level_J_per_mol) ground = i;
+  const double lowest = members[ground].level_J_per_mol;
+  std::size_t reference = 0;  // the conformer the relative energies are counted from
+  for (std::size_t i = 0; i < members.size(); ++i)
+    if (members[i].relative_energy_J_per_mol < members[reference].relative_energy_J_per_mol) reference = i;
+
+  PreparedSpecies p = members[ground].prepared;
+  p.species.name = species.name;
+  p.species.origin = species.origin;
+  p.species.enthalpy_of_formation_J_per_mol = species.enthalpy_of_formation_J_per_mol;
+  p.tunnelling.reset();
+  // The ensemble's 0 K level above the electronic energy of the reference conformer.
+  p.zero_point_energy_J_per_mol = species.conformer_energies_include_zpe
+                                      ? members[reference].prepared.zero_point_energy_J_per_mol + lowest -
+                                            members[reference].relative_energy_J_per_mol
+                                      : lowest - members[reference].relative_energy_J_per_mol;
+  p.warnings.clear();
+  p.notes.clear();
+  p.notes.push_back(fmt::format(
+      "conformer ensemble of {}: Boltzmann-weighted sum of partition functions, each conformer with its own "
+      "structure, symmetry number, frequencies and ZPE; relative energies {}; facts and modes shown are "
+      "those "
+      "of the lowest zero-point level, conformer {} ('{}')",
+      members.size(),
+      species.conformer_energies_include_zpe ? "given including the zero-point energy"
+                                             : "electronic, each conformer's ZPE added",
+      ground + 1, members[ground].file));
+  for (std::size_t i = 0; i < members.size(); ++i) {
+    members[i].level_J_per_mol -= lowest;
+    for (const std::string& w : members[i].prepared.warnings)
+      p.warnings.push_back(fmt::format("conformer {} ('{}'): {}", i + 1, members[i].file, w));
+    for (const std::string& n : members[i].prepared.notes)
+      p.notes.push_back(fmt::format("conformer {} ('{}'): {}", i + 1, members[i].file, n));
+  }
+  p.conformers = std::move(members);
+  p.H298_minus_H0_J_per_mol = Evaluator(p).terms(c::reference_temperature_K).H_minus_H0_J_per_mol;
+  return p;
+}
 
 }  // namespace
 
@@ -254,6 +363,7 @@ void check_model_options(const ModelOptions& options) {
 }
 
 PreparedSpecies prepare_species(const Species& species, const ModelOptions& options) {
+  if (!species.conformers.empty()) return prepare_ensemble(species, options);
   PreparedSpecies p;
   p.species = species;
   p.options = options;
@@ -261,7 +371,7 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
   check_model_options(options);
   limits::check_species(species);
   if (species.symmetry_number < 1)
-    fail(species.origin,
+    fail(key_location(species, "symmetry_number"),
          fmt::format("symmetry number must be a positive integer, got {}", species.symmetry_number));
   p.rotor = analyse_rotor(species, options.linear_tolerance_amu_A2);
   if (species.hessian_J_per_m2) {
@@ -273,10 +383,11 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
           "cm^-1", species.origin);
   }
 
+  p.scale = resolve_scale_factors(options.scale, species.scale, options.frequency_scale, species.origin);
+  p.options.frequency_scale = p.scale.entropy;  // the factor of vibrations_cm1
   std::vector<double> scaled;
-  for (double v : p.species.frequencies_cm1) scaled.push_back(v * options.frequency_scale);
-  if (options.frequency_scale != 1.0)
-    p.notes.push_back(fmt::format("wavenumbers scaled by {}", options.frequency_scale));
+  for (double v : p.species.frequencies_cm1) scaled.push_back(v * p.scale.entropy);
+  if (const std::string note = scale_factors_note(p.scale); !note.empty()) p.notes.push_back(note);
 
   const int expected = expected_vibration_count(species, p.rotor.type);
   const int given = static_cast<int>(p.species.frequencies_cm1.size());
@@ -285,20 +396,28 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
         fmt::format("species '{}' has {} vibrational frequencies, expected {} ({}, N = {})", species.name,
                     given, expected, count_rule(species, p.rotor.type), atom_count(species));
     if (!options.mode_count_mismatch_is_warning)
-      fail(species.origin, message + "; --allow-mode-count-mismatch accepts it");
+      fail(key_location(species, species.hessian_J_per_m2 ? "hessian" : "frequencies"),
+           message + "; --allow-mode-count-mismatch accepts it");
     p.warnings.push_back(message);
   }
   apply_imaginary_policy(p, scaled);
+  if (species.tunnelling && !p.tunnelling)
+    p.warnings.push_back("'tunnelling' barriers ignored: the species is not treated as a transition state");
 
   replace_torsions(p);
+  plan_low_frequency(p);
 
   double sum_cm1 = 0.0;
   for (double v : p.vibrations_cm1) sum_cm1 += v;
-  p.zero_point_energy_J_per_mol = 0.5 * sum_cm1 * c::wavenumber_J_per_mol;
+  p.zero_point_energy_J_per_mol = 0.5 * sum_cm1 * (p.scale.zpe / p.scale.entropy) * c::wavenumber_J_per_mol;
   for (const HinderedRotorModel& r : p.hindered_rotors)
     p.zero_point_energy_J_per_mol += r.levels.zero_point_energy_J_per_mol;
   if (!p.is_gas) p.notes.push_back("adsorbate: all 3N motions treated as harmonic vibrations");
-  p.H298_minus_H0_J_per_mol = Evaluator(p).terms(c::reference_temperature_K).H_minus_H0_J_per_mol;
+  const ThermoPoint at298 = Evaluator(p).terms(c::reference_temperature_K);
+  p.H298_minus_H0_J_per_mol = at298.H_minus_H0_J_per_mol;
+  for (const SoftMode& m : soft_harmonic_modes(p.vibration_adjustment, p.vibrations_cm1))
+    p.warnings.push_back(soft_mode_warning(m, p.vibration_adjustment.options.soft_mode_warning_below_cm1,
+                                           at298.S_J_per_mol_K));
   return p;
 }
 
@@ -320,6 +439,12 @@ double classical_Cv_over_R(const PreparedSpecies& prepared) {
   if (prepared.rotor.type == RotorType::linear) rotation = 1.0;
   if (prepared.rotor.type == RotorType::nonlinear) rotation = 1.5;
   return 1.5 + rotation + vibrations + 0.5 * static_cast<double>(prepared.hindered_rotors.size());
+}
+
+std::vector<double> conformer_populations(const PreparedSpecies& prepared, double T_K) {
+  std::vector<double> populations;
+  if (!prepared.conformers.empty()) Evaluator(prepared).ensemble_terms(T_K, &populations);
+  return populations;
 }
 
 }  // namespace vibtherm

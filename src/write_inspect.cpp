@@ -46,18 +46,38 @@ std::string inspect_text(const std::vector<SpeciesFacts>& all) {
                      f.molar_mass_g_per_mol > 0
                          ? fmt::format(", {:.4f} g/mol (standard atomic weights)", f.molar_mass_g_per_mol)
                          : std::string()));
-    line("rotor", rotor_type_name(f.rotor));
-    line("moments", fmt::format("{:.5f}  {:.5f}  {:.5f} amu A^2", f.moments_amu_A2[0], f.moments_amu_A2[1],
-                                f.moments_amu_A2[2]));
-    line("rot. constants", numbers(f.rotational_constants_cm1, "{:.5f}") + " cm^-1");
-    line("", numbers(f.rotational_constants_GHz, "{:.4f}") + " GHz");
-    line("rot. temperatures", numbers(f.rotational_temperatures_K, "{:.4f}") + " K");
-    line("symmetry number", std::to_string(f.symmetry_number));
+    // An adsorbate neither translates nor rotates: its rotor facts would mean nothing.
+    if (f.phase != "adsorbate") {
+      line("rotor", rotor_type_name(f.rotor));
+      line("moments", fmt::format("{:.5f}  {:.5f}  {:.5f} amu A^2", f.moments_amu_A2[0], f.moments_amu_A2[1],
+                                  f.moments_amu_A2[2]));
+      line("rot. constants", numbers(f.rotational_constants_cm1, "{:.5f}") + " cm^-1");
+      line("", numbers(f.rotational_constants_GHz, "{:.4f}") + " GHz");
+      line("rot. temperatures", numbers(f.rotational_temperatures_K, "{:.4f}") + " K");
+      line("symmetry number", std::to_string(f.symmetry_number));
+    }
     line("ground degeneracy", std::to_string(f.ground_degeneracy));
     line("modes", fmt::format("{} given, {} expected for N = {}, {} imaginary", f.given_modes,
                               f.expected_modes, f.atom_count, f.imaginary_modes));
     line("frequencies", wavenumbers(f.frequencies_cm1) + (f.frequencies_cm1.empty() ? "" : " cm^-1"));
     line("zero-point energy", fmt::format("{:.4f} kJ/mol", f.zero_point_energy_J_per_mol / 1e3));
+    if (f.wigner_kappa_298)
+      line("tunnelling 298.15 K",
+           fmt::format("kappa Wigner {:.4f}, Eckart {}", *f.wigner_kappa_298,
+                       f.eckart_kappa_298 ? fmt::format("{:.4f}", *f.eckart_kappa_298)
+                                          : std::string("- (give 'tunnelling' barrier heights)")));
+    for (std::size_t i = 0; i < f.conformers.size(); ++i) {
+      const ConformerFacts& c = f.conformers[i];
+      std::string pops;
+      for (std::size_t j = 0; j < c.populations.size(); ++j)
+        pops += fmt::format("{}{:.4f} at {:g} K", j ? ", " : "", c.populations[j],
+                            f.population_temperatures_K[j]);
+      line(i == 0 ? "conformers" : "",
+           fmt::format("{} {}: relative energy {:.3f} kJ/mol, ZPE {:.3f} kJ/mol, level {:.3f} kJ/mol; "
+                       "population {}",
+                       i + 1, c.file, c.relative_energy_J_per_mol / 1e3, c.zero_point_energy_J_per_mol / 1e3,
+                       c.level_J_per_mol / 1e3, pops));
+    }
     for (const auto& w : f.warnings) line("warning", w);
     for (const auto& n : f.notes) line("note", n);
   }
@@ -102,6 +122,17 @@ std::string inspect_json(const std::vector<SpeciesFacts>& all) {
                         {"expected", f.expected_modes},
                         {"imaginary", f.imaginary_modes},
                         {"atoms", f.atom_count}};
+    if (f.wigner_kappa_298) s["tunnelling_298"]["kappa_wigner"] = *f.wigner_kappa_298;
+    if (f.eckart_kappa_298) s["tunnelling_298"]["kappa_eckart"] = *f.eckart_kappa_298;
+    if (!f.conformers.empty()) {
+      s["population_temperatures"] = f.population_temperatures_K;
+      for (const ConformerFacts& c : f.conformers)
+        s["conformers"].push_back({{"file", c.file},
+                                   {"relative_energy", c.relative_energy_J_per_mol / 1e3},
+                                   {"zpe", c.zero_point_energy_J_per_mol / 1e3},
+                                   {"level", c.level_J_per_mol / 1e3},
+                                   {"populations", c.populations}});
+    }
     s["warnings"] = f.warnings;
     s["notes"] = f.notes;
     doc["species"].push_back(s);

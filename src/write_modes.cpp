@@ -103,6 +103,16 @@ std::string modes_to_text(const std::vector<ModesReport>& reports) {
         }
         out += '\n';
       }
+      std::string changed, treatment;
+      for (const ModeConstants& m : r.modes) {
+        if (m.treatment.empty()) continue;
+        treatment = m.treatment;
+        changed += changed.empty() ? "" : ", ";
+        changed += m.treatment == "qrrho" ? fmt::format("{} (w = {:.3f})", m.index, m.qrrho_weight)
+                                          : fmt::format("{} (raised to {:g} cm^-1)", m.index, m.floor_cm1);
+      }
+      if (!changed.empty())
+        out += fmt::format("  changed by the low-frequency treatment ({}): mode {}\n", treatment, changed);
       out += '\n';
     }
     size_t label_width = 0;
@@ -196,6 +206,13 @@ std::string modes_to_json(const std::vector<ModesReport>& reports) {
                             {"T_unfreeze", m.unfreezes_at_K},
                             {"T_half", m.half_active_at_K},
                             {"T_active", m.active_at_K}});
+    for (std::size_t i = 0; i < r.modes.size(); ++i) {
+      const ModeConstants& m = r.modes[i];
+      if (m.treatment.empty()) continue;
+      vibrations[i]["treatment"] = m.treatment;
+      if (m.treatment == "qrrho") vibrations[i]["qrrho_weight"] = m.qrrho_weight;
+      if (m.treatment == "floor") vibrations[i]["floor_wavenumber"] = m.floor_cm1;
+    }
     s["vibrations"] = std::move(vibrations);
     ordered_json temperatures = ordered_json::array();
     for (const ModesPoint& p : r.points) {

@@ -2,8 +2,10 @@
 
 #include <fmt/format.h>
 
+#include <algorithm>
 #include <array>
 #include <nlohmann/json.hpp>
+#include <string_view>
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/markup.hpp"
@@ -21,11 +23,13 @@ struct MotionRef {
 constexpr std::array<MotionRef, 5> motions{{{"translation", &ThermoPoint::translation},
                                             {"rotation", &ThermoPoint::rotation},
                                             {"vibration", &ThermoPoint::vibration},
-                                            {"internal_rotation", &ThermoPoint::internal_rotation},
+                                            {"hindered_rotors", &ThermoPoint::internal_rotation},
                                             {"electronic", &ThermoPoint::electronic}}};
 
-// Short labels for the text breakdown columns.
-constexpr std::array<const char*, 5> motion_tags{"trans", "rot", "vib", "hrot", "elec"};
+// Text breakdown columns carry the motion's name, as in CSV and JSON ("Cp.hindered_rotors").
+std::size_t column_width(const MotionRef& m) {
+  return std::max<std::size_t>(8, 3 + std::string_view(m.name).size());
+}
 
 }  // namespace
 
@@ -48,13 +52,27 @@ std::string text_piece(const SpeciesTable& table, const TableWriteOptions& optio
     head += fmt::format(" {:>10} {:>11}", "G-H298", "-(G-H298)/T");
     units += fmt::format(" {:>10} {:>11}", "kJ/mol", "J/mol/K");
     if (breakdown) {
-      for (const char* tag : motion_tags) {
-        head += fmt::format(" {:>8} {:>8}", fmt::format("Cp.{}", tag), fmt::format("S.{}", tag));
-        units += fmt::format(" {:>8} {:>8}", "J/mol/K", "J/mol/K");
+      for (const auto& m : motions) {
+        const std::size_t w = column_width(m);
+        head +=
+            fmt::format(" {:>{}} {:>{}}", fmt::format("Cp.{}", m.name), w, fmt::format("S.{}", m.name), w);
+        units += fmt::format(" {:>{}} {:>{}}", "J/mol/K", w, "J/mol/K", w);
       }
     }
+    const bool kappa = table.tunnelling.size() == table.rows.size() && !table.rows.empty();
+    if (kappa) {
+      head += fmt::format(" {:>11} {:>11}", "kappa.Wig", "kappa.Eck");
+      units += fmt::format(" {:>11} {:>11}", "1", "1");
+    }
+    const bool populations = table.populations.size() == table.rows.size() && !table.rows.empty();
+    if (populations)
+      for (std::size_t j = 0; j < table.conformer_files.size(); ++j) {
+        head += fmt::format(" {:>8}", fmt::format("pop.{}", j + 1));
+        units += fmt::format(" {:>8}", "1");
+      }
     out += head + '\n' + units + '\n';
-    for (const auto& r : table.rows) {
+    for (std::size_t i = 0; i < table.rows.size(); ++i) {
+      const auto& r = table.rows[i];
       std::string line = fmt::format("{:>9.2f} {:>9.3f}", r.T_K, r.Cp_J_per_mol_K);
       if (model) line += fmt::format(" {:>9.3f}", r.Cv_J_per_mol_K);
       line += fmt::format(" {:>9.3f} {:>10.3f}", r.S_J_per_mol_K, r.H_minus_H298_J_per_mol / 1e3);
@@ -63,9 +81,20 @@ std::string text_piece(const SpeciesTable& table, const TableWriteOptions& optio
           fmt::format(" {:>10.3f} {:>11.3f}", r.G_minus_H298_J_per_mol / 1e3, r.gibbs_function_J_per_mol_K);
       if (breakdown)
         for (const auto& m : motions)
-          line += fmt::format(" {:>8.3f} {:>8.3f}", (r.*m.terms).Cp_over_R * R, (r.*m.terms).S_over_R * R);
+          line += fmt::format(" {:>{}.3f} {:>{}.3f}", (r.*m.terms).Cp_over_R * R, column_width(m),
+                              (r.*m.terms).S_over_R * R, column_width(m));
+      if (kappa) {
+        const TunnellingPoint& k = table.tunnelling[i];
+        line += fmt::format(" {:>11.5g} {:>11}", k.wigner, k.eckart ? fmt::format("{:.5g}", *k.eckart) : "-");
+      }
+      if (populations)
+        for (double x : table.populations[i]) line += fmt::format(" {:>8.4f}", x);
       out += line + '\n';
     }
+    if (populations)
+      for (std::size_t j = 0; j < table.conformer_files.size(); ++j)
+        out +=
+            fmt::format("pop.{}: population of conformer {} ({})\n", j + 1, j + 1, table.conformer_files[j]);
   }
   return out;
 }
@@ -78,7 +107,9 @@ std::string csv_header(const TableWriteOptions& options) {
   if (breakdown)
     for (const auto& m : motions)
       out += fmt::format(",Cp_{0}_J_per_mol_K,S_{0}_J_per_mol_K,H_minus_H0_{0}_kJ_per_mol", m.name);
-  out += '\n';
+  // Tunnelling corrections of transition states; empty for other species (the header comes
+  // before the species are known).
+  out += ",kappa_wigner,kappa_eckart\n";
   return out;
 }
 
@@ -87,7 +118,8 @@ std::string csv_piece(const SpeciesTable& table, const TableWriteOptions& option
   std::string out;
   {
     const std::string name = csv_field(table.name);  // RFC 4180
-    for (const auto& r : table.rows) {
+    for (std::size_t i = 0; i < table.rows.size(); ++i) {
+      const auto& r = table.rows[i];
       const bool model = table.has_model_columns;
       out += fmt::format("{},{},{:.6f},{},{:.6f},{:.6f},{},{:.6f},{:.6f}", name, r.T_K, r.Cp_J_per_mol_K,
                          model ? fmt::format("{:.6f}", r.Cv_J_per_mol_K) : "", r.S_J_per_mol_K,
@@ -101,6 +133,11 @@ std::string csv_piece(const SpeciesTable& table, const TableWriteOptions& option
                                      t.H_over_RT * R * r.T_K / 1e3)
                        : std::string(",,,");
         }
+      {
+        const TunnellingPoint* k = i < table.tunnelling.size() ? &table.tunnelling[i] : nullptr;
+        out += k ? fmt::format(",{:.8g},{}", k->wigner, k->eckart ? fmt::format("{:.8g}", *k->eckart) : "")
+                 : std::string(",,");
+      }
       out += '\n';
     }
   }
@@ -137,8 +174,11 @@ std::string json_piece(const SpeciesTable& table, const TableWriteOptions& optio
   {
     nlohmann::ordered_json entry;
     entry["name"] = table.name;
+    if (!table.notes.empty()) entry["notes"] = table.notes;
+    if (!table.conformer_files.empty()) entry["conformers"] = table.conformer_files;
     entry["rows"] = nlohmann::ordered_json::array();
-    for (const auto& r : table.rows) {
+    for (std::size_t i = 0; i < table.rows.size(); ++i) {
+      const auto& r = table.rows[i];
       nlohmann::ordered_json row;
       row["T"] = r.T_K;
       row["Cp"] = r.Cp_J_per_mol_K;
@@ -157,6 +197,19 @@ std::string json_piece(const SpeciesTable& table, const TableWriteOptions& optio
                                     {"H_minus_H0", t.H_over_RT * R * r.T_K / 1e3},
                                     {"ln_q", t.ln_q}};
         }
+        if (!table.conformer_files.empty()) {
+          const MotionTerms& t = r.conformers;
+          row["motions"]["conformers"] = {{"Cp", t.Cp_over_R * R},
+                                          {"Cv", t.Cv_over_R * R},
+                                          {"S", t.S_over_R * R},
+                                          {"H_minus_H0", t.H_over_RT * R * r.T_K / 1e3},
+                                          {"ln_q", t.ln_q}};
+        }
+      }
+      if (i < table.populations.size()) row["populations"] = table.populations[i];
+      if (i < table.tunnelling.size()) {
+        row["kappa_wigner"] = table.tunnelling[i].wigner;
+        if (table.tunnelling[i].eckart) row["kappa_eckart"] = *table.tunnelling[i].eckart;
       }
       entry["rows"].push_back(row);
     }

@@ -89,6 +89,9 @@ YamlValues::Entries YamlValues::entries(const YAML::Node& map, const std::string
     const std::string& k = key.Scalar();
     if (std::find(allowed.begin(), allowed.end(), k) == allowed.end()) {
       std::string suggestion = closest_word(k, allowed);
+      // A key that is the start of a known one ('symmetry' for 'symmetry_number') is a near miss too.
+      for (const std::string& a : allowed)
+        if (suggestion.empty() && k.size() >= 3 && a.rfind(k, 0) == 0) suggestion = a;
       if (!suggestion.empty())
         error(key, "unknown key " + quote(k) + " in " + what + ", did you mean '" + suggestion + "'?");
       error(key, "unknown key " + quote(k) + " in " + what + ", expected one of " + join(allowed));
@@ -185,7 +188,8 @@ std::vector<YamlValues::Located> YamlValues::wavenumbers(const YAML::Node& node,
     if (!to_wavenumber_cm1(1.0, unit))
       error(*find(e, "unit"),
             "unknown wavenumber unit " + quote(unit) + ", expected one of " + wavenumber_units_list());
-    if (value) {
+    if (value && value->IsSequence()) values = value;  // {value: [...], unit: ...} as well
+    if (value && !value->IsSequence()) {
       out.push_back({*to_wavenumber_cm1(number(*value, what), unit), *value});
     } else {
       if (!values->IsSequence())
@@ -220,6 +224,19 @@ double YamlValues::energy_J_per_mol(const YAML::Node& node, const std::string& w
     return *J_per_mol;
   }
   return number(node, what) * 1e3;  // bare number: kJ/mol (design.md section 4)
+}
+
+ScaleFactors YamlValues::scale_factors(const YAML::Node& node, const std::string& what) const {
+  if (!node.IsMap())
+    error(node, what + " is " + describe(node) +
+                    ", expected a map such as {zpe: 0.98, enthalpy: 0.99, entropy: 1.0}");
+  const Entries e = entries(node, what, {"zpe", "enthalpy", "entropy"});
+  ScaleFactors f;
+  if (const YAML::Node* v = find(e, "zpe")) f.zpe = positive_number(*v, what + " 'zpe'");
+  if (const YAML::Node* v = find(e, "enthalpy")) f.enthalpy = positive_number(*v, what + " 'enthalpy'");
+  if (const YAML::Node* v = find(e, "entropy")) f.entropy = positive_number(*v, what + " 'entropy'");
+  if (f.empty()) error(node, what + " is empty, expected at least one of zpe, enthalpy, entropy");
+  return f;
 }
 
 }  // namespace vibtherm

@@ -11,6 +11,7 @@
 #include <vector>
 
 #include "vibtherm/error.hpp"
+#include "vibtherm/species.hpp"
 
 namespace vibtherm {
 
@@ -66,6 +67,9 @@ class YamlValues {
   std::vector<Located> wavenumbers(const YAML::Node& node, const std::string& what, bool allow_single) const;
   // An energy per mole: a bare number in kJ/mol, or {value, unit} in any energy unit. J/mol.
   double energy_J_per_mol(const YAML::Node& node, const std::string& what) const;
+  // Frequency scale factors per quantity, the map {zpe, enthalpy, entropy} (each optional,
+  // positive) of a species file's or a method file's `scale` (design.md section 4).
+  ScaleFactors scale_factors(const YAML::Node& node, const std::string& what) const;
 
  private:
   std::string file_;

@@ -361,3 +361,41 @@ TEST_CASE("hindered rotors are read with barrier, scan and top") {
                         "c.yaml"),
       doctest::Contains("'top' must hold bond atom 1 and not atom 2"), InputError);
 }
+
+TEST_CASE("unit maps hold lists and rotor energies; species keys keep their locations") {
+  const Species s = read_species_yaml(
+      "name: w\n"
+      "atoms:\n  - [O, 0.0, 0.0, 0.065569]\n  - [H, 0.0, 0.756950, -0.520313]\n  - [H, 0.0, -0.756950, "
+      "-0.520313]\n"
+      "frequencies: {value: [1595.0, 3657.0, 3756.0], unit: cm^-1}\n",
+      "in.yaml");
+  CHECK(s.frequencies_cm1 == std::vector<double>{1595.0, 3657.0, 3756.0});
+  CHECK(key_location(s, "frequencies").line == 6);
+  CHECK(key_location(s, "atoms").line == 2);
+  CHECK(key_location(s, "no such key").line == s.origin.line);
+  const Species e = read_species_yaml(
+      "name: e\n"
+      "atoms:\n  - [C, 0, 0, 0.7650]\n  - [C, 0, 0, -0.7650]\n  - [H, 1.0192, 0, 1.1573]\n"
+      "  - [H, -0.5096, 0.8826, 1.1573]\n  - [H, -0.5096, -0.8826, 1.1573]\n  - [H, -1.0192, 0, -1.1573]\n"
+      "  - [H, 0.5096, 0.8826, -1.1573]\n  - [H, 0.5096, -0.8826, -1.1573]\n"
+      "frequencies: [289, 822, 822, 995, 1190, 1190, 1379, 1388, 1468, 1468, 1469, 1469, 2896, 2954, 2969, "
+      "2969, "
+      "2985, 2985]\n"
+      "hindered_rotors:\n  - {bond: [1, 2], symmetry: 3, barrier: {value: 2.87, unit: kcal/mol}, replaces: "
+      "289}\n",
+      "in.yaml");
+  REQUIRE(e.hindered_rotors.size() == 1);
+  // 1 kcal/mol = 4.184 kJ/mol (thermochemical calorie, common practice).
+  CHECK(*e.hindered_rotors[0].barrier_J_per_mol == doctest::Approx(2.87 * 4184.0));
+  std::string text =
+      "name: e\natoms:\n  - [C, 0, 0, 0.7650]\n  - [C, 0, 0, -0.7650]\n  - [H, 1.0192, 0, 1.1573]\n"
+      "  - [H, -0.5096, 0.8826, 1.1573]\n  - [H, -0.5096, -0.8826, 1.1573]\n"
+      "  - [H, -1.0192, 0, -1.1573]\n  - [H, 0.5096, 0.8826, -1.1573]\n  - [H, 0.5096, -0.8826, -1.1573]\n"
+      "frequencies: [289, 822, 822, 995, 1190, 1190, 1379, 1388, 1468, 1468, 1469, 1469, 2896, 2954, "
+      "2969, 2969, 2985, 2985]\n"
+      "hindered_rotors:\n  - {bond: [1, 2], symmetry: 3, replaces: 289,\n"
+      "     scan: {value: [[0, 0.0], [30, 1.435], [60, 2.87], [90, 1.435]], unit: kcal/mol}}\n";
+  const Species scanned = read_species_yaml(text, "in.yaml");
+  REQUIRE(scanned.hindered_rotors[0].scan.size() == 4);
+  CHECK(scanned.hindered_rotors[0].scan[2].energy_J_per_mol == doctest::Approx(2.87 * 4184.0));
+}

@@ -2,12 +2,22 @@
 // zero-point energy and mode counts. Pure computation; writers format it.
 #pragma once
 
+#include <optional>
 #include <string>
 #include <vector>
 
 #include "vibtherm/thermo.hpp"
 
 namespace vibtherm {
+
+// One conformer of an ensemble, with its populations at SpeciesFacts::population_temperatures_K.
+struct ConformerFacts {
+  std::string file;
+  double relative_energy_J_per_mol = 0.0;  // as given
+  double zero_point_energy_J_per_mol = 0.0;
+  double level_J_per_mol = 0.0;  // zero-point level above the ensemble's lowest
+  std::vector<double> populations;
+};
 
 struct SpeciesFacts {
   std::string name;
@@ -30,6 +40,10 @@ struct SpeciesFacts {
   int ground_degeneracy = 1;
   std::vector<std::string> warnings;
   std::vector<std::string> notes;
+  std::vector<double> population_temperatures_K;  // 298.15, 500, 1000 K for ensembles
+  std::vector<ConformerFacts> conformers;
+  std::optional<double> wigner_kappa_298;  // transition states
+  std::optional<double> eckart_kappa_298;  // with barrier heights
 };
 
 SpeciesFacts describe_species(const PreparedSpecies& prepared);

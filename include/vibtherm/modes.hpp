@@ -46,6 +46,12 @@ struct ModeConstants {
   double unfreezes_at_K = 0.0;               // Cv/R reaches the `frozen` threshold
   double half_active_at_K = 0.0;             // Cv/R = 1/2: half of its classical share
   double active_at_K = 0.0;                  // Cv/R reaches the `active` threshold
+  // The low-frequency treatment (low_frequency.hpp) that changes this mode, "" when none;
+  // the activation temperatures above are those of the harmonic oscillator.
+  std::string treatment;
+  int vibration = 0;          // 0-based position in PreparedSpecies::vibrations_cm1
+  double qrrho_weight = 1.0;  // under qrrho: w(ν̃)
+  double floor_cm1 = 0.0;     // under floor: the wavenumber used for S, Cp and H
 };
 
 // Effective quadratic degrees of freedom 2·Cv/R of each motion. `total` is translation +
@@ -76,7 +82,7 @@ struct RotorConstants {
 struct ModesPoint {
   double T_K = 0.0;
   DegreesOfFreedom dof;                  // from the engine's per-motion terms at T
-  std::vector<ModeActivation> modes;     // same order as ModesReport::modes
+  std::vector<ModeActivation> modes;     // same order as ModesReport::modes; Cv/R under the treatment
   std::vector<double> rotors_Cv_over_R;  // same order as ModesReport::rotors
   int count(ModeState state) const;
 };

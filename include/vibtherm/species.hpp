@@ -15,6 +15,19 @@ namespace vibtherm {
 
 enum class Phase { gas, adsorbate };
 
+// Treatment of low-frequency vibrations (low_frequency.hpp): harmonic oscillators,
+// Grimme's quasi-rigid-rotor-harmonic-oscillator interpolation, or a wavenumber floor.
+enum class LowFrequencyMethod { harmonic, qrrho, floor };
+
+// Frequency scale factors per quantity, as given (input key `scale`, or a method file);
+// an absent factor falls back to the one-for-all --scale.
+struct ScaleFactors {
+  std::optional<double> zpe;       // zero-point energy
+  std::optional<double> enthalpy;  // thermal enthalpy H(T) - H(0)
+  std::optional<double> entropy;   // entropy and heat capacity
+  bool empty() const { return !zpe && !enthalpy && !entropy; }
+};
+
 struct Atom {
   std::string symbol;     // element symbol, e.g. "C"
   std::string isotope;    // isotope label as given ("D", "C13"); empty = most abundant
@@ -45,6 +58,13 @@ struct HinderedRotor {
   double replaces_cm1 = 0.0;                // wavenumber of the torsional mode replaced
 };
 
+// Barrier heights of a transition state for the Eckart tunnelling correction (tunnelling.hpp).
+struct TunnellingBarriers {
+  SourceLocation where;
+  double forward_J_per_mol = 0.0;  // from the reactant side
+  double reverse_J_per_mol = 0.0;  // from the product side
+};
+
 // Alternative to atoms: the rigid-rotor data given directly.
 struct RigidRotorData {
   double mass_amu = 0.0;
@@ -52,9 +72,14 @@ struct RigidRotorData {
   bool linear = false;
 };
 
+struct Conformer;
+
 struct Species {
   std::string name;
-  SourceLocation origin;    // file the species came from
+  SourceLocation origin;  // file the species came from
+  // Where each top-level key was given (YAML), so checks made after reading point at the key
+  // at fault; key_location() falls back to `origin`.
+  std::map<std::string, SourceLocation> key_locations;
   std::vector<Atom> atoms;  // empty when `rotor_data` is used
   std::optional<RigidRotorData> rotor_data;
   std::map<std::string, int> formula;   // element -> count; from atoms or `formula`
@@ -69,6 +94,25 @@ struct Species {
   Phase phase = Phase::gas;
   bool transition_state = false;
   std::vector<HinderedRotor> hindered_rotors;
+  std::optional<LowFrequencyMethod> low_frequency;  // input key; --low-freq overrides
+  ScaleFactors scale;                               // input key `scale`
+  std::optional<TunnellingBarriers> tunnelling;     // input key `tunnelling` (transition states)
+  // A Boltzmann ensemble of conformers instead of one structure (conformers.hpp); each
+  // brings its own geometry, symmetry number, frequencies and zero-point energy.
+  std::vector<Conformer> conformers;
+  bool conformer_energies_include_zpe = false;  // `conformer_energies: zero_point_inclusive`
 };
+
+struct Conformer {
+  SourceLocation where;                    // the entry in the ensemble's file
+  std::string file;                        // as written (relative to the ensemble's file)
+  Species species;                         // read from `file`
+  double relative_energy_J_per_mol = 0.0;  // electronic (or ZPE-inclusive), relative to the lowest
+};
+
+inline SourceLocation key_location(const Species& species, const std::string& key) {
+  const auto it = species.key_locations.find(key);
+  return it == species.key_locations.end() ? species.origin : it->second;
+}
 
 }  // namespace vibtherm

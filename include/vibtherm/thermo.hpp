@@ -3,14 +3,18 @@
 // adsorbate) functions at any temperature, with the per-motion breakdown.
 #pragma once
 
+#include <optional>
 #include <string>
 #include <vector>
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/geometry.hpp"
 #include "vibtherm/hindered_rotor.hpp"
+#include "vibtherm/low_frequency.hpp"
 #include "vibtherm/partition.hpp"
+#include "vibtherm/scale_factors.hpp"
 #include "vibtherm/species.hpp"
+#include "vibtherm/tunnelling.hpp"
 
 namespace vibtherm {
 
@@ -18,13 +22,18 @@ enum class StandardState { bar, atm, molar };  // 1 bar (IUPAC default), 1 atm, 
 
 struct ModelOptions {
   StandardState standard_state = StandardState::bar;
-  double pressure_Pa = constants::bar_Pa;    // used for bar/atm; overrides if set explicitly
-  double frequency_scale = 1.0;              // multiplies every wavenumber
-  bool transition_state = false;             // drop one imaginary mode as reaction coordinate
+  double pressure_Pa = constants::bar_Pa;  // used for bar/atm; overrides if set explicitly
+  double frequency_scale = 1.0;            // multiplies every wavenumber (one for all quantities)
+  ScaleFactors scale;                      // per quantity; each overrides frequency_scale and the file
+  std::optional<LowFrequencyMethod> low_frequency_method;  // overrides the species' low_frequency
+  LowFrequencyOptions low_frequency;                       // parameters; its method is set from the two above
+  bool transition_state = false;                           // drop one imaginary mode as reaction coordinate
   double imaginary_as_real_below_cm1 = 0.0;  // |ν̃| below this: treated as real, with a warning
   bool mode_count_mismatch_is_warning = false;
   double linear_tolerance_amu_A2 = default_linear_tolerance_amu_A2;
 };
+
+struct ConformerMember;
 
 struct PreparedSpecies {
   Species species;
@@ -34,12 +43,28 @@ struct PreparedSpecies {
   std::vector<double> vibrations_cm1;  // real wavenumbers used, scaled, input order,
                                        // without the torsions replaced by hindered rotors
   std::vector<HinderedRotorModel> hindered_rotors;
+  ResolvedScaleFactors scale;                           // factors used (vibrations_cm1 carry the entropy one)
+  VibrationAdjustment vibration_adjustment;             // low-frequency treatment and enthalpy scaling
+  std::optional<TransitionStateTunnelling> tunnelling;  // transition states: κ(T) reported beside
   std::vector<double> used_frequencies_cm1;  // as reported: includes a dropped reaction coordinate (negative)
   double zero_point_energy_J_per_mol = 0.0;  // harmonic ½hcν̃ sum plus the rotors' own ZPE
   double H298_minus_H0_J_per_mol = 0.0;      // thermal enthalpy at 298.15 K, the table's reference
   std::vector<std::string> warnings;         // things the user must see
   std::vector<std::string> notes;            // model choices worth stating
+  // An ensemble (species.conformers): its members; the fields above then describe the
+  // member with the lowest zero-point level, except name, origin, ΔfH°, ZPE and H298.
+  std::vector<ConformerMember> conformers;
 };
+
+struct ConformerMember {
+  std::string file;                        // as given in the ensemble file
+  PreparedSpecies prepared;                // prepared on its own under the same options
+  double relative_energy_J_per_mol = 0.0;  // as given (electronic, or ZPE-inclusive)
+  double level_J_per_mol = 0.0;            // its zero-point level above the ensemble's lowest
+};
+
+// Boltzmann populations of an ensemble's conformers at T (empty for a single structure).
+std::vector<double> conformer_populations(const PreparedSpecies& prepared, double T_K);
 
 // Refuses options outside limits.hpp (scale factor, pressure, imaginary threshold).
 void check_model_options(const ModelOptions& options);
@@ -52,6 +77,7 @@ struct ThermoPoint {
   double T_K = 0.0;
   MotionTerms translation, rotation, vibration, electronic;  // dimensionless, per motion
   MotionTerms internal_rotation;                             // all hindered rotors together
+  MotionTerms conformers;  // ensembles: mixing and level terms beyond the population-weighted motions
   double Cv_J_per_mol_K = 0.0;
   double Cp_J_per_mol_K = 0.0;
   double S_J_per_mol_K = 0.0;

@@ -7,6 +7,7 @@
 #include <vector>
 
 #include "vibtherm/thermo.hpp"
+#include "vibtherm/tunnelling.hpp"
 
 namespace vibtherm {
 
@@ -15,6 +16,11 @@ struct SpeciesTable {
   std::string caption;  // one line shown above the text table (model summary)
   std::vector<ThermoPoint> rows;
   bool has_model_columns = true;  // Cv, H−H0 and the per-motion breakdown are known
+  std::vector<TunnellingPoint> tunnelling;
+  std::vector<std::string> notes;                // model notes (JSON "notes"): scale factors, treatments
+  std::vector<std::string> conformer_files;      // ensembles: the conformers, in input order
+  std::vector<std::vector<double>> populations;  // ensembles: per row, one population per conformer  //
+                                                 // transition states: κ(T) per row, else empty
 };
 
 struct TableWriteOptions {

@@ -39,6 +39,24 @@ void add_common_options(CLI::App& sub, CommonOptions& o, bool with_temps,
   sub.add_flag("--keep-going", o.keep_going, "finish the good species, list the failures, exit 1");
   sub.add_option("--scale", o.frequency_scale, "multiply every wavenumber by this factor")
       ->capture_default_str();
+  sub.add_option("--scale-zpe", o.scale_zpe,
+                 "scale factor for the zero-point energy (overrides --scale and the file)");
+  sub.add_option("--scale-enthalpy", o.scale_enthalpy,
+                 "scale factor for the thermal enthalpy H(T)-H(0) (overrides --scale and the file)");
+  sub.add_option("--scale-entropy", o.scale_entropy,
+                 "scale factor for the entropy and heat capacity (overrides --scale and the file)");
+  sub.add_option(
+         "--low-freq", o.low_frequency,
+         "low-frequency treatment: harmonic, qrrho (Grimme entropy, Li-Head-Gordon enthalpy) or floor "
+         "(raise to --low-freq-floor); overrides the species' low_frequency (default harmonic)")
+      ->check(CLI::IsMember({"harmonic", "qrrho", "floor"}));
+  sub.add_option("--qrrho-omega0", o.qrrho_omega0_cm1, "qrrho: wavenumber where the weighting is 1/2, cm^-1")
+      ->capture_default_str();
+  sub.add_option("--low-freq-floor", o.floor_cm1, "floor: wavenumbers below this (cm^-1) are raised to it")
+      ->capture_default_str();
+  sub.add_option("--soft-mode-warning", o.soft_mode_warning_below_cm1,
+                 "warn about harmonic modes below this wavenumber (cm^-1), with their share of S(298.15 K)")
+      ->capture_default_str();
   sub.add_flag(
       "--transition-state", o.transition_state,
       "treat every species as a transition state: drop one imaginary mode (the reaction coordinate)");
@@ -67,6 +85,14 @@ ModelOptions model_options(const CommonOptions& o) {
     m.pressure_Pa = *p;
   }
   m.frequency_scale = o.frequency_scale;
+  m.scale = {o.scale_zpe, o.scale_enthalpy, o.scale_entropy};
+  if (o.low_frequency == "harmonic") m.low_frequency_method = LowFrequencyMethod::harmonic;
+  if (o.low_frequency == "qrrho") m.low_frequency_method = LowFrequencyMethod::qrrho;
+  if (o.low_frequency == "floor") m.low_frequency_method = LowFrequencyMethod::floor;
+  m.low_frequency.qrrho_omega0_cm1 = o.qrrho_omega0_cm1;
+  m.low_frequency.floor_cm1 = o.floor_cm1;
+  m.low_frequency.soft_mode_warning_below_cm1 = o.soft_mode_warning_below_cm1;
+  check_low_frequency_options(m.low_frequency);
   m.transition_state = o.transition_state;
   m.imaginary_as_real_below_cm1 = o.imaginary_as_real_below_cm1;
   m.mode_count_mismatch_is_warning = o.mode_count_warning;

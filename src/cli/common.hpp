@@ -37,6 +37,11 @@ struct CommonOptions {
   std::string output = "-";
   bool keep_going = false;
   double frequency_scale = 1.0;
+  std::optional<double> scale_zpe, scale_enthalpy, scale_entropy;
+  std::string low_frequency;  // empty: the species' key, else harmonic
+  double qrrho_omega0_cm1 = LowFrequencyOptions{}.qrrho_omega0_cm1;
+  double floor_cm1 = LowFrequencyOptions{}.floor_cm1;
+  double soft_mode_warning_below_cm1 = LowFrequencyOptions{}.soft_mode_warning_below_cm1;
   bool transition_state = false;
   double imaginary_as_real_below_cm1 = 0.0;
   bool mode_count_warning = false;

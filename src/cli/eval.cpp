@@ -88,7 +88,7 @@ void setup_eval(CLI::App& sub) {
             spdlog::warn("{}: {:g} K is outside the polynomial's range {:g}-{:g} K (extrapolated)", name, T,
                          polynomial_T_min_K(*p), polynomial_T_max_K(*p));
       }
-      SpeciesTable table{name, caption(*p), {}, false};
+      SpeciesTable table{name, caption(*p), {}, false, {}, {}, {}, {}};
       for (double T : temps) table.rows.push_back(polynomial_table_row(*p, T));
       tables.push_back(std::move(table));
     }

@@ -8,6 +8,7 @@
 
 #include "common.hpp"
 #include "vibtherm/checksum.hpp"
+#include "vibtherm/fit_advice.hpp"
 #include "vibtherm/fit_nasa.hpp"
 #include "vibtherm/fit_plan.hpp"
 #include "vibtherm/write_fit_json.hpp"
@@ -90,17 +91,31 @@ void setup_fit(CLI::App& sub) {
     OutputSet outputs;
     const std::size_t out = outputs.add(o->common.output);
     const FitPlan plan(fit);  // grid, basis and constraint factorisation shared by every species
+    const std::optional<FitPlan> searched = searched_breakpoint_plan(fit);  // for the Cp-warning advice
     const auto options_list = model_option_list(*o);
     std::vector<FitRecord> records;
     const BatchSummary batch = for_each_species<FitRecord>(
         o->common, paths,
         [&](const SpeciesInput& in, std::vector<LogLine>& log) {
           SpeciesFit f = fit_species(in.prepared, plan);
+          if (searched)
+            if (auto advice = searched_breakpoint_advice(in.prepared, f, *searched))
+              f.fit.warnings.push_back(*advice);
           // Check that the record fits its format now, so one bad name fails one species.
           if (o->form == "nasa7") write_nasa7_record(std::get<Nasa7>(f.polynomial));
           if (o->form == "nasa9") write_nasa9_record(std::get<Nasa9>(f.polynomial));
           log_fit(f, log);
-          return FitRecord{std::move(f), {in.path, sha256_hex(in.bytes), options_list}};
+          // The factors and the treatment this species used (options, its file's keys, --scale).
+          auto species_options = options_list;
+          const PreparedSpecies& p = in.prepared;
+          species_options.push_back({"scale_zpe", fmt::format("{:g}", p.scale.zpe)});
+          species_options.push_back({"scale_enthalpy", fmt::format("{:g}", p.scale.enthalpy)});
+          species_options.push_back({"scale_entropy", fmt::format("{:g}", p.scale.entropy)});
+          species_options.push_back(
+              {"low_frequency", low_frequency_method_name(p.vibration_adjustment.options.method)});
+          if (!p.conformers.empty())
+            species_options.push_back({"conformers", fmt::format("{}", p.conformers.size())});
+          return FitRecord{std::move(f), {in.path, sha256_hex(in.bytes), std::move(species_options)}};
         },
         [&](FitRecord& r) { records.push_back(std::move(r)); });
     const std::vector<std::string> header = {

@@ -33,7 +33,6 @@ void setup_modes(CLI::App& sub) {
       "--svg", *svg_path,
       "also draw a heat map of mode activation and the curve F(T) to this SVG file ('-' = standard "
       "output); it spans the requested temperatures, widened to at least one decade");
-  sub.footer("Default temperatures: 50, 100, 200, 298.15, 500, 1000, 2000, 3000 K.");
   sub.callback([options, thresholds, svg_path] {
     validate(*thresholds);
     const auto temps = temperatures_or(*options, default_modes_temperatures());

@@ -9,6 +9,7 @@
 
 #include "common.hpp"
 #include "vibtherm/checksum.hpp"
+#include "vibtherm/fit_advice.hpp"
 #include "vibtherm/write_report.hpp"
 
 namespace vibtherm::cli {
@@ -45,9 +46,7 @@ void setup_report(CLI::App& sub) {
       ->capture_default_str();
   sub.add_flag("--allow-missing-hf", o->allow_missing_hf,
                "report species without enthalpy_of_formation, their NASA part marked as not fitted");
-  sub.footer(
-      "Writes report.html unless -o says otherwise ('-' = standard output). Default table temperatures: "
-      "298.15, 500, 1000, 1500, 2000, 3000 K.");
+  sub.footer("Writes report.html unless -o says otherwise ('-' = standard output).");
   sub.callback([o] {
     ReportOptions report;
     report.temperatures_K = temperatures_or(o->common, default_report_temperatures());
@@ -61,12 +60,20 @@ void setup_report(CLI::App& sub) {
     OutputSet outputs;
     const std::size_t out = outputs.add(o->common.output);
     std::vector<ReportSpecies> species;
+    const std::optional<FitPlan> searched =
+        searched_breakpoint_plan(report.fit);  // for the Cp-warning advice
     const BatchSummary batch = for_each_species<ReportSpecies>(
         o->common, paths,
         [&](const SpeciesInput& in, std::vector<LogLine>& log) {
           ReportSpecies r = gather_report_species(in.prepared, report);
           r.input_file = in.path;
           r.input_sha256 = sha256_hex(in.bytes);
+          if (r.fit && searched)
+            if (auto advice = searched_breakpoint_advice(in.prepared, *r.fit, *searched)) {
+              r.fit->fit.warnings.push_back(*advice);
+              ++r.warning_count;
+              log.push_back({spdlog::level::warn, *advice});
+            }
           if (!r.fit)
             log.push_back(
                 {spdlog::level::warn, fmt::format("{}: {}", in.prepared.species.name, r.not_fitted_reason)});

@@ -10,6 +10,18 @@ namespace vibtherm::cli {
 
 namespace {
 
+// The model choices that differ from the plain harmonic, unscaled model, as a second line.
+std::string model_line(const PreparedSpecies& p) {
+  std::string line;
+  if (p.vibration_adjustment.options.method != LowFrequencyMethod::harmonic)
+    line += fmt::format("low-frequency treatment {}",
+                        low_frequency_method_name(p.vibration_adjustment.options.method));
+  if (!(p.scale.zpe == 1.0 && p.scale.enthalpy == 1.0 && p.scale.entropy == 1.0))
+    line += fmt::format("{}frequency scale factors: ZPE {:g}, enthalpy {:g}, entropy/Cp {:g}",
+                        line.empty() ? "" : "; ", p.scale.zpe, p.scale.enthalpy, p.scale.entropy);
+  return line.empty() ? "" : "\n" + line;
+}
+
 std::string caption(const PreparedSpecies& p) {
   std::string standard = fmt::format("{:g} Pa", p.options.pressure_Pa);
   if (p.options.standard_state == StandardState::molar)
@@ -20,10 +32,12 @@ std::string caption(const PreparedSpecies& p) {
     standard = "1 atm";
   if (!p.is_gas)
     return fmt::format("adsorbate, {} harmonic modes, ZPE {:.3f} kJ/mol", p.vibrations_cm1.size(),
-                       p.zero_point_energy_J_per_mol / 1e3);
+                       p.zero_point_energy_J_per_mol / 1e3) +
+           model_line(p);
   return fmt::format("{} rotor, symmetry number {}, {} vibrations, standard state {}, ZPE {:.3f} kJ/mol",
                      rotor_type_name(p.rotor.type), p.species.symmetry_number, p.vibrations_cm1.size(),
-                     standard, p.zero_point_energy_J_per_mol / 1e3);
+                     standard, p.zero_point_energy_J_per_mol / 1e3) +
+         model_line(p);
 }
 
 }  // namespace
@@ -52,7 +66,12 @@ void setup_table(CLI::App& sub) {
         *options, paths,
         [&](const SpeciesInput& in, std::vector<LogLine>&) {
           const PreparedSpecies& p = in.prepared;
-          return table_piece(format, {p.species.name, caption(p), tabulate(p, temps), true}, write);
+          SpeciesTable table{p.species.name, caption(p), tabulate(p, temps), true, {}, p.notes, {}, {}};
+          if (p.tunnelling) table.tunnelling = tunnelling_table(*p.tunnelling, temps);
+          for (const ConformerMember& m : p.conformers) table.conformer_files.push_back(m.file);
+          if (!p.conformers.empty())
+            for (double T : temps) table.populations.push_back(conformer_populations(p, T));
+          return table_piece(format, table, write);
         },
         [&, first = true](std::string& piece) mutable {
           if (!first) outputs.write(out, table_separator(format));

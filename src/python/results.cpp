@@ -24,7 +24,7 @@ struct MotionRef {
 constexpr std::array<MotionRef, 5> motions{{{"translation", &ThermoPoint::translation},
                                             {"rotation", &ThermoPoint::rotation},
                                             {"vibration", &ThermoPoint::vibration},
-                                            {"internal_rotation", &ThermoPoint::internal_rotation},
+                                            {"hindered_rotors", &ThermoPoint::internal_rotation},
                                             {"electronic", &ThermoPoint::electronic}}};
 
 // One column of `rows`, computed as the JSON writers compute it, so the numbers are the

@@ -20,6 +20,14 @@ cases = [
     ("modes.schema.json", ["modes", examples, "--format", "json"]),
     ("fit.schema.json", ["fit", examples, "--form", "json"]),
 ]
+# The model extensions: a qrrho species, a transition state with tunnelling, an ensemble.
+data = os.path.join(root, "tests", "data")
+extensions = [os.path.join(data, f) for f in ("model-soft-mode.yaml", "model-ts-symmetric.yaml", "model-conformers.yaml")]
+cases += [
+    ("table.schema.json", ["table", *extensions, "--format", "json", "--breakdown", "--temps", "300,1000"]),
+    ("inspect.schema.json", ["inspect", *extensions, "--format", "json"]),
+    ("modes.schema.json", ["modes", *extensions, "--format", "json"]),
+]
 passed = failed = 0
 for schema_name, args in cases:
     schema_path = os.path.join(root, "schemas", schema_name)

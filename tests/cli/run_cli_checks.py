@@ -114,8 +114,8 @@ with tempfile.TemporaryDirectory() as tmp:
 ethane = os.path.join(root, "tests", "data", "ethane_rotor.yaml")
 r = run("table", ethane, "--temps", "150,298.15,1000", "--format", "json", "--breakdown")
 rows = json.loads(r.stdout)["species"][0]["rows"] if r.returncode == 0 else []
-check("hindered rotor: table breakdown has internal_rotation",
-      len(rows) == 3 and all("internal_rotation" in x.get("motions", {}) for x in rows), r.stderr)
+check("hindered rotor: table breakdown has hindered_rotors",
+      len(rows) == 3 and all("hindered_rotors" in x.get("motions", {}) for x in rows), r.stderr)
 r = run("modes", ethane, "--temps", "150,298.15,1000", "--format", "json")
 mspec = json.loads(r.stdout)["species"][0] if r.returncode == 0 else {}
 temps = mspec.get("temperatures", [])
@@ -139,5 +139,18 @@ with tempfile.TemporaryDirectory() as tmp:
     hr = table_rows(ethane)
     check("hindered rotor: changes S against the harmonic torsion",
           len(h) == len(hr) == 3 and all(abs(a["S"] - b["S"]) > 0.1 for a, b in zip(h, hr)), f"{h} {hr}")
+
+# A misspelt subcommand: one line, exit 2, a suggestion; help states exit codes and defaults.
+r = run("tabel", water)
+check("unknown subcommand suggests table", r.returncode == 2 and r.stderr.strip().count("\n") == 0
+      and "unknown subcommand 'tabel', did you mean 'table'?" in r.stderr, r.stderr)
+r = run("--help")
+check("top-level help lists the exit codes", "Exit status: 0 success; 1" in r.stdout, r.stdout[-300:])
+for sub, default in [("table", "Default temperatures: 298.15 K, then 300 to 3000 K"),
+                     ("modes", "Default temperatures: 50, 100, 200"),
+                     ("report", "Default table temperatures: 298.15, 500"), ("inspect", "Temperatures: none")]:
+    r = run(sub, "--help")
+    check(f"{sub} --help states defaults, -q and exit codes",
+          default in r.stdout and "-q, --quiet" in r.stdout and "Exit status" in r.stdout, r.stdout[-400:])
 
 checks.finish()
