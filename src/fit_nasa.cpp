@@ -34,6 +34,7 @@
 #include "vibtherm/elements.hpp"
 #include "vibtherm/error.hpp"
 #include "vibtherm/fit_plan.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm {
 
@@ -173,6 +174,8 @@ FitRange parse_fit_range(std::string_view text, NasaForm form) {
     if (std::isnan(t)) continue;
     if (t <= 0.0 || t <= last)
       fail({}, fmt::format("--range '{}': temperatures must be positive and ascending", text));
+    limits::check_temperature(t,
+                              fmt::format("--range '{}': breakpoint {}", limits::display_name(text), i + 1));
     last = t;
   }
   return out;
@@ -210,6 +213,13 @@ FitResult fit_samples(const FitInput& input, const FitPlan& plan) {
   }
   result.breakpoints_K = plan.breakpoints_K(chosen);
   result.ranges = plan.solve(chosen, input);
+  for (const Nasa9Range& r : result.ranges) {
+    bool ok = std::isfinite(r.b1) && std::isfinite(r.b2);
+    for (double a : r.a) ok = ok && std::isfinite(a);
+    if (!ok)
+      fail({}, fmt::format("species '{}': the NASA fit {:g}-{:g} K gave a coefficient that is not finite",
+                           limits::display_name(input.name), r.T_low_K, r.T_high_K));
+  }
   result.errors = errors_of(input, result.ranges);
   result.excursions = excursions_of(input, result.ranges);
 

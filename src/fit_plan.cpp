@@ -12,6 +12,7 @@
 #include "fit_terms.hpp"
 #include "vibtherm/constants.hpp"
 #include "vibtherm/error.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm {
 
@@ -111,6 +112,12 @@ std::unique_ptr<const FitPlan::System> build_system(const std::vector<double>& g
 std::vector<double> grid_of(const FitOptions& options) {
   const auto& bp = options.range.breakpoints_K;
   const double T_lo = bp.front(), T_hi = bp.back();
+  limits::check_range(options.grid_step_K, limits::min_grid_step_K, T_hi - T_lo, "--grid-step", "K");
+  if ((T_hi - T_lo) / options.grid_step_K > static_cast<double>(limits::max_grid_points))
+    fail({},
+         fmt::format(
+             "--grid-step {:g} K gives more than {} grid points over {:g}-{:g} K, expected a coarser step",
+             options.grid_step_K, limits::max_grid_points, T_lo, T_hi));
   std::vector<double> grid;
   for (double t = T_lo; t < T_hi; t += options.grid_step_K) grid.push_back(t);
   for (double t : bp)
@@ -144,6 +151,12 @@ FitPlan::FitPlan(const FitOptions& options, std::vector<double> grid_K)
       fail({}, fmt::format("--range: no 'auto' candidate between {} and {} K (need {} K margins)", bp[ai - 1],
                            bp[ai + 1], options.auto_margin_K));
   }
+  if (static_cast<double>(candidates_.size()) * static_cast<double>(grid_K_.size()) > 4e6)
+    fail({},
+         fmt::format(
+             "--range: searching 'auto' over {} candidates on {} grid points is too much work, expected a "
+             "narrower range or a coarser --grid-step",
+             candidates_.size(), grid_K_.size()));
   for (const auto& c : candidates_)
     systems_.push_back(build_system(grid_K_, c, options.form, options.Cp_slope_continuous));
 }

@@ -29,4 +29,11 @@ std::string escape_markup(std::string_view text) {
   return out;
 }
 
+std::string csv_field(std::string_view text) {
+  if (text.find_first_of(",\"\n\r") == std::string_view::npos) return std::string(text);
+  std::string quoted = "\"";
+  for (char c : text) quoted += c == '"' ? std::string("\"\"") : std::string(1, c);
+  return quoted + '"';
+}
+
 }  // namespace vibtherm

@@ -24,10 +24,16 @@ bool is_species_extension(const std::string& ext) { return ext == ".yaml" || ext
 
 namespace {
 
-// Manifests may list manifests; this bounds a cycle.
-constexpr int max_manifest_depth = 16;
+struct Expansion {
+  std::vector<std::string> open;  // the manifests being expanded, outermost first
+  std::size_t manifests_read = 0;
+};
 
-void expand_one(const std::string& arg, const SourceLocation& where, int depth,
+std::string too_many() {
+  return "more than " + std::to_string(max_species_paths) + " species files in one run, expected fewer";
+}
+
+void expand_one(const std::string& arg, const SourceLocation& where, int depth, Expansion& state,
                 std::vector<std::string>& out) {
   std::error_code ec;
   if (fs::is_directory(arg, ec)) {
@@ -43,27 +49,63 @@ void expand_one(const std::string& arg, const SourceLocation& where, int depth,
       fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where,
            "directory holds no species files, expected files ending in .yaml, .yml or .xyz");
     std::sort(found.begin(), found.end());
+    if (out.size() + found.size() > max_species_paths)
+      fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where, too_many());
     out.insert(out.end(), found.begin(), found.end());
     return;
   }
   if (lowercase_extension(arg) != ".list") {
+    if (out.size() >= max_species_paths)
+      fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where, too_many());
     out.push_back(arg);
     return;
   }
   if (depth > max_manifest_depth)
     fail({arg, 0, 0}, "manifests nested more than " + std::to_string(max_manifest_depth) +
                           " deep, expected no manifest to list itself");
+  const fs::path canonical = fs::weakly_canonical(arg, ec);
+  const std::string key = ec ? arg : canonical.string();
+  if (++state.manifests_read > max_manifests)
+    fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where,
+         "more than " + std::to_string(max_manifests) + " manifests read in one run, expected fewer");
+  std::vector<std::string>& open = state.open;
+  if (std::find(open.begin(), open.end(), key) != open.end())
+    fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where,
+         "manifest lists itself (directly or through other manifests), expected no cycle");
+  if (!fs::is_regular_file(arg, ec))
+    fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where,
+         "manifest is missing or not a regular file, expected a readable file listing species files");
   std::ifstream in(arg, std::ios::binary);
   if (!in) fail({arg, 0, 0}, "cannot read manifest, expected a readable file listing species files");
   std::stringstream buffer;
   buffer << in.rdbuf();
-  std::string text = buffer.str();
-  require_text(text, arg);
+  const std::vector<ManifestEntry> entries = parse_manifest(buffer.str(), arg);
   fs::path base = fs::path(arg).parent_path();
+  open.push_back(key);
+  for (const ManifestEntry& entry : entries) {
+    fs::path path(entry.path);
+    if (path.is_relative()) path = base / path;
+    if (!fs::exists(path, ec)) fail(entry.where, "listed file " + quote(entry.path) + " does not exist");
+    expand_one(path.string(), entry.where, depth + 1, state, out);
+  }
+  open.pop_back();
+}
+
+}  // namespace
+
+std::vector<std::string> expand_species_paths(const std::vector<std::string>& args) {
+  std::vector<std::string> out;
+  Expansion state;
+  for (const std::string& arg : args) expand_one(arg, {}, 0, state, out);
+  return out;
+}
+
+std::vector<ManifestEntry> parse_manifest(const std::string& text, const std::string& file_name) {
+  require_text(text, file_name);
+  std::vector<ManifestEntry> out;
   std::istringstream lines(text);
   std::string line;
   int line_number = 0;
-  bool any = false;
   while (std::getline(lines, line)) {
     ++line_number;
     std::size_t hash = line.find('#');
@@ -71,22 +113,14 @@ void expand_one(const std::string& arg, const SourceLocation& where, int depth,
     std::size_t first = line.find_first_not_of(" \t\r");
     if (first == std::string::npos) continue;
     std::size_t last = line.find_last_not_of(" \t\r");
-    std::string entry = line.substr(first, last - first + 1);
-    fs::path path(entry);
-    if (path.is_relative()) path = base / path;
-    SourceLocation entry_where{arg, line_number, static_cast<int>(first) + 1};
-    if (!fs::exists(path, ec)) fail(entry_where, "listed file " + quote(entry) + " does not exist");
-    expand_one(path.string(), entry_where, depth + 1, out);
-    any = true;
+    if (out.size() >= max_species_paths)
+      fail({file_name, line_number, 1},
+           "manifest lists more than " + std::to_string(max_species_paths) + " files, expected fewer");
+    out.push_back(
+        {line.substr(first, last - first + 1), {file_name, line_number, static_cast<int>(first) + 1}});
   }
-  if (!any) fail({arg, 0, 0}, "manifest lists no files, expected one species file path per line");
-}
-
-}  // namespace
-
-std::vector<std::string> expand_species_paths(const std::vector<std::string>& args) {
-  std::vector<std::string> out;
-  for (const std::string& arg : args) expand_one(arg, {}, 0, out);
+  if (out.empty())
+    fail({file_name, 0, 0}, "manifest lists no files, expected one species file path per line");
   return out;
 }
 

@@ -7,6 +7,7 @@
 #include <string>
 
 #include "vibtherm/error.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm {
 
@@ -27,7 +28,12 @@ double parse_number(std::string_view text, std::string_view whole) {
 
 double positive(double value, std::string_view whole) {
   if (!(value > 0.0))
-    fail({}, fmt::format("temperature list '{}': temperatures must be positive, got {} K", whole, value));
+    fail({}, fmt::format("temperature list '{}': temperatures must be positive, got {} K",
+                         limits::display_name(whole), value));
+  if (!(value >= limits::min_temperature_K && value <= limits::max_temperature_K))
+    fail({},
+         fmt::format("temperature list '{}': {:g} K is outside {:g} to {:g} K", limits::display_name(whole),
+                     value, limits::min_temperature_K, limits::max_temperature_K));
   return value;
 }
 

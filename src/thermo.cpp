@@ -7,6 +7,7 @@
 
 #include "vibtherm/conformers.hpp"
 #include "vibtherm/hessian.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm {
 
@@ -252,13 +253,30 @@ class Evaluator {
   }
 
   ThermoPoint point(double T_K) const {
-    if (!(T_K > 0.0) || !std::isfinite(T_K))
-      fail({}, fmt::format("temperature must be positive, got {} K", T_K));
+    limits::check_temperature(T_K, "temperature");
     ThermoPoint point = terms(T_K);
     point.H_minus_H298_J_per_mol = point.H_minus_H0_J_per_mol - p_.H298_minus_H0_J_per_mol;
     point.G_minus_H298_J_per_mol = point.H_minus_H298_J_per_mol - T_K * point.S_J_per_mol_K;
     point.gibbs_function_J_per_mol_K = -point.G_minus_H298_J_per_mol / T_K;
+    check_finite(point);
     return point;
+  }
+
+  // No NaN or inf leaves the engine: the inputs are bounded (limits.hpp), so one here is
+  // a defect, reported with the species and the quantity rather than written out.
+  void check_finite(const ThermoPoint& point) const {
+    const std::pair<const char*, double> values[] = {{"Cp", point.Cp_J_per_mol_K},
+                                                     {"Cv", point.Cv_J_per_mol_K},
+                                                     {"S", point.S_J_per_mol_K},
+                                                     {"H-H0", point.H_minus_H0_J_per_mol},
+                                                     {"H-H298", point.H_minus_H298_J_per_mol},
+                                                     {"G-H298", point.G_minus_H298_J_per_mol}};
+    for (const auto& [what, value] : values)
+      if (!std::isfinite(value))
+        fail(p_.species.origin,
+             fmt::format("species '{}': {} at {:g} K is {}, expected a finite value (please report "
+                         "the input)",
+                         limits::display_name(p_.species.name), what, point.T_K, value));
   }
 
  private:
@@ -334,21 +352,36 @@ PreparedSpecies prepare_ensemble(const Species& species, const ModelOptions& opt
 
 }  // namespace
 
+void check_model_options(const ModelOptions& options) {
+  limits::check_range(options.frequency_scale, limits::min_frequency_scale, limits::max_frequency_scale,
+                      "frequency scale factor", "");
+  if (options.standard_state != StandardState::molar)
+    limits::check_range(options.pressure_Pa, limits::min_pressure_Pa, limits::max_pressure_Pa, "pressure",
+                        "Pa");
+  limits::check_range(options.imaginary_as_real_below_cm1, 0.0, limits::max_wavenumber_cm1,
+                      "--imaginary-as-real-below", "cm^-1");
+}
+
 PreparedSpecies prepare_species(const Species& species, const ModelOptions& options) {
   if (!species.conformers.empty()) return prepare_ensemble(species, options);
   PreparedSpecies p;
   p.species = species;
   p.options = options;
   p.is_gas = species.phase == Phase::gas;
-  if (!(options.frequency_scale > 0.0) || !std::isfinite(options.frequency_scale))
-    fail({}, fmt::format("frequency scale factor must be positive, got {}", options.frequency_scale));
-  if (p.is_gas && !(options.pressure_Pa > 0.0 && std::isfinite(options.pressure_Pa)))
-    fail({}, fmt::format("pressure must be positive, got {} Pa", options.pressure_Pa));
+  check_model_options(options);
+  limits::check_species(species);
   if (species.symmetry_number < 1)
     fail(key_location(species, "symmetry_number"),
          fmt::format("symmetry number must be a positive integer, got {}", species.symmetry_number));
   p.rotor = analyse_rotor(species, options.linear_tolerance_amu_A2);
-  if (species.hessian_J_per_m2) frequencies_from_hessian(p);
+  if (species.hessian_J_per_m2) {
+    frequencies_from_hessian(p);
+    for (double v : p.species.frequencies_cm1)
+      limits::check_range(
+          std::abs(v), limits::min_wavenumber_cm1, limits::max_wavenumber_cm1,
+          fmt::format("species '{}': |wavenumber| from the Hessian", limits::display_name(species.name)),
+          "cm^-1", species.origin);
+  }
 
   p.scale = resolve_scale_factors(options.scale, species.scale, options.frequency_scale, species.origin);
   p.options.frequency_scale = p.scale.entropy;  // the factor of vibrations_cm1

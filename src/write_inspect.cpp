@@ -5,6 +5,8 @@
 
 #include <nlohmann/json.hpp>
 
+#include "vibtherm/markup.hpp"
+
 namespace vibtherm {
 
 namespace {
@@ -88,10 +90,10 @@ std::string inspect_csv(const std::vector<SpeciesFacts>& all) {
       "number,"
       "atoms,modes_given,modes_expected,imaginary,zpe_kJ_per_mol\n";
   for (const auto& f : all) {
-    out += fmt::format("{},{},{},{},{:.6f},{:.4f},{:.6f},{:.6f},{:.6f},{},{},{},{},{},{:.6f}\n", f.name,
-                       f.formula, f.phase, rotor_type_name(f.rotor), f.mass_amu, f.molar_mass_g_per_mol,
-                       f.moments_amu_A2[0], f.moments_amu_A2[1], f.moments_amu_A2[2], f.symmetry_number,
-                       f.atom_count, f.given_modes, f.expected_modes, f.imaginary_modes,
+    out += fmt::format("{},{},{},{},{:.6f},{:.4f},{:.6f},{:.6f},{:.6f},{},{},{},{},{},{:.6f}\n",
+                       csv_field(f.name), csv_field(f.formula), f.phase, rotor_type_name(f.rotor), f.mass_amu,
+                       f.molar_mass_g_per_mol, f.moments_amu_A2[0], f.moments_amu_A2[1], f.moments_amu_A2[2],
+                       f.symmetry_number, f.atom_count, f.given_modes, f.expected_modes, f.imaginary_modes,
                        f.zero_point_energy_J_per_mol / 1e3);
   }
   return out;

@@ -142,17 +142,6 @@ std::string modes_to_text(const std::vector<ModesReport>& reports) {
   return out;
 }
 
-namespace {
-
-std::string csv_field(const std::string& text) {
-  if (text.find_first_of(",\"\n\r") == std::string::npos) return text;
-  std::string quoted = "\"";
-  for (char c : text) quoted += c == '"' ? std::string("\"\"") : std::string(1, c);
-  return quoted + '"';
-}
-
-}  // namespace
-
 std::string modes_to_csv(const std::vector<ModesReport>& reports) {
   std::string out = "species,T_K,item,mode,wavenumber_cm1,theta_K,Cv_over_R,dof,classical_dof,state\n";
   for (const ModesReport& r : reports) {

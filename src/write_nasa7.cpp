@@ -3,6 +3,7 @@
 #include <fmt/format.h>
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 
 #include "vibtherm/error.hpp"
@@ -38,6 +39,20 @@ void check_name(const Nasa7& sp) {
                          sp.name, sp.name.size()));
   if (sp.name.find_first_of(" \t") != std::string::npos)
     fail({}, fmt::format("species '{}': NASA-7 names cannot contain blanks", sp.name));
+  // A reader of the format takes '!' as the start of a comment, and a line starting with
+  // END, THERMO or REACTIONS as a section keyword: such a name would not read back.
+  if (sp.name.find('!') != std::string::npos)
+    fail({},
+         fmt::format("species '{}': NASA-7 names cannot contain '!' (a reader takes it as a comment): give "
+                     "another `name` in the species file",
+                     sp.name));
+  std::string upper = sp.name;
+  for (char& c : upper) c = static_cast<char>(std::toupper(static_cast<unsigned char>(c)));
+  for (const char* keyword : {"END", "THERMO", "REACTIONS"})
+    if (upper.rfind(keyword, 0) == 0)
+      fail({}, fmt::format("species '{}': a NASA-7 name cannot start with {} (a reader takes the line as the "
+                           "keyword): give another `name` in the species file",
+                           sp.name, keyword));
   if (sp.note.size() > 6)
     fail({}, fmt::format("species '{}': note '{}' is longer than 6 characters (columns 19-24)", sp.name,
                          sp.note));

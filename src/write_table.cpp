@@ -8,6 +8,7 @@
 #include <string_view>
 
 #include "vibtherm/constants.hpp"
+#include "vibtherm/markup.hpp"
 
 namespace vibtherm {
 
@@ -116,13 +117,7 @@ std::string csv_piece(const SpeciesTable& table, const TableWriteOptions& option
   const bool breakdown = options.breakdown;
   std::string out;
   {
-    // Names are quoted when they hold a comma or quote (RFC 4180).
-    std::string name = table.name;
-    if (name.find_first_of(",\"\n") != std::string::npos) {
-      std::string quoted = "\"";
-      for (char ch : name) quoted += ch == '"' ? std::string("\"\"") : std::string(1, ch);
-      name = quoted + "\"";
-    }
+    const std::string name = csv_field(table.name);  // RFC 4180
     for (std::size_t i = 0; i < table.rows.size(); ++i) {
       const auto& r = table.rows[i];
       const bool model = table.has_model_columns;

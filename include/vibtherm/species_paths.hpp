@@ -2,8 +2,11 @@
 // species files in them, manifests to the files they list.
 #pragma once
 
+#include <cstddef>
 #include <string>
 #include <vector>
+
+#include "vibtherm/error.hpp"
 
 namespace vibtherm {
 
@@ -13,9 +16,24 @@ std::string lowercase_extension(const std::string& path);
 // True for the extensions of species files (.yaml, .yml, .xyz).
 bool is_species_extension(const std::string& extension);
 
+// Limits of the expansion: manifests listing manifests at most this deep, and at most
+// this many species paths and manifest reads in all (a manifest listing itself, directly or not, is an error
+// of its own).
+inline constexpr int max_manifest_depth = 16;
+inline constexpr std::size_t max_species_paths = 1000000;
+inline constexpr std::size_t max_manifests = 10000;  // manifest files read in one run
+
 // Expands the command-line arguments: files as given, directories to their species
 // files (sorted by name, not recursive), manifests (*.list: one path per line, relative
 // to the manifest, '#' comments) to the files they list.
 std::vector<std::string> expand_species_paths(const std::vector<std::string>& args);
+
+// One line of a manifest: the path as written and where it stands.
+struct ManifestEntry {
+  std::string path;
+  SourceLocation where;
+};
+// The entries of a manifest's text (no file system access); InputError when it lists none.
+std::vector<ManifestEntry> parse_manifest(const std::string& text, const std::string& file_name);
 
 }  // namespace vibtherm

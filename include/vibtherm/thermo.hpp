@@ -66,6 +66,9 @@ struct ConformerMember {
 // Boltzmann populations of an ensemble's conformers at T (empty for a single structure).
 std::vector<double> conformer_populations(const PreparedSpecies& prepared, double T_K);
 
+// Refuses options outside limits.hpp (scale factor, pressure, imaginary threshold).
+void check_model_options(const ModelOptions& options);
+
 // Validates and prepares. Throws InputError (located at the species file) for imaginary
 // frequencies not allowed by the options and for a wrong mode count unless downgraded.
 PreparedSpecies prepare_species(const Species& species, const ModelOptions& options = {});

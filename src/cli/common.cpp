@@ -11,6 +11,7 @@
 #include <iostream>
 
 #include "vibtherm/error.hpp"
+#include "vibtherm/limits.hpp"
 #include "vibtherm/read_species.hpp"
 #include "vibtherm/temperatures.hpp"
 #include "vibtherm/units.hpp"
@@ -95,6 +96,7 @@ ModelOptions model_options(const CommonOptions& o) {
   m.transition_state = o.transition_state;
   m.imaginary_as_real_below_cm1 = o.imaginary_as_real_below_cm1;
   m.mode_count_mismatch_is_warning = o.mode_count_warning;
+  check_model_options(m);
   return m;
 }
 

@@ -23,8 +23,25 @@ ARGUMENT_CASES = [
      "error: --pressure '-1bar': expected a positive pressure such as 1bar, 1atm or 101325Pa"),
     (["../data/water.yaml", "--pressure", "0 atm"],
      "error: --pressure '0 atm': expected a positive pressure such as 1bar, 1atm or 101325Pa"),
+    # Temperatures, scale and pressure are bounded (limits.hpp); each once gave NaN/inf.
+    (["../data/water.yaml", "--temps", "0.001"],
+     "error: temperature list '0.001': 0.001 K is outside 1 to 100000 K"),
+    (["../data/water.yaml", "--temps", "1e300"],
+     "error: temperature list '1e300': 1e+300 K is outside 1 to 100000 K"),
+    (["../data/water.yaml", "--scale", "1e-320"], "error: frequency scale factor is 9.99989e-321, expected 0.1 to 10"),
+    (["../data/water.yaml", "--pressure", "1e-30Pa"], "error: pressure is 1e-30, expected 1e-06 to 1e+09 Pa"),
+    (["/dev/zero"], "/dev/zero: error: unknown file type '(none)', expected a species file ending in .yaml, .yml or .xyz"),
     (["does-not-exist.yaml"],
      "does-not-exist.yaml: error: cannot read file (missing or not readable), expected a species file"),
+]
+
+# Bad fit options (arguments after `fit`): each once exhausted memory (std::bad_alloc).
+FIT_ARGUMENT_CASES = [
+    (["../data/water.yaml", "--grid-step", "1e-14"], "error: --grid-step is 1e-14, expected 0.1 to 2800 K"),
+    (["../data/water.yaml", "--range", "200:1000:1e300"],
+     "error: --range '200:1000:1e300': breakpoint 3 is 1e+300, expected 1 to 100000 K"),
+    (["../data/water.yaml", "--range", "200:auto:1e8"],
+     "error: --range '200:auto:1e8': breakpoint 3 is 1e+08, expected 1 to 100000 K"),
 ]
 
 
@@ -66,7 +83,9 @@ def main():
         run_case(exe, bad_dir, [path.name], expected, path.name, failures, subcommand)
     for args, expected in ARGUMENT_CASES:
         run_case(exe, bad_dir, args, expected, " ".join(args), failures)
-    total = len(inputs) + len(ARGUMENT_CASES)
+    for args, expected in FIT_ARGUMENT_CASES:
+        run_case(exe, bad_dir, args, expected, "fit " + " ".join(args), failures, "fit")
+    total = len(inputs) + len(ARGUMENT_CASES) + len(FIT_ARGUMENT_CASES)
     for f in failures:
         print("FAIL", f)
     print(f"{total - len(failures)} of {total} bad-input cases behave as expected")

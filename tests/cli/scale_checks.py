@@ -80,4 +80,34 @@ with tempfile.TemporaryDirectory() as tmp:
 r = run("table", "/dev/zero")
 check("/dev/zero refused", r.returncode == 2 and len(r.stderr.strip().splitlines()) == 1, r.stderr)
 
+with tempfile.TemporaryDirectory() as tmp:
+    zero = os.path.join(tmp, "zero.yaml")
+    os.symlink("/dev/zero", zero)
+    r = run("table", zero)
+    check("a .yaml link to /dev/zero refused", r.returncode == 2 and "not a regular file" in r.stderr, r.stderr)
+
+    body = "".join(line for line in open(water) if not line.startswith("name:"))  # water without its name
+    def species(file, name):
+        path = os.path.join(tmp, file)
+        open(path, "w").write(f"name: '{name}'\n" + body)
+        return path
+    # fit refuses NASA-7 names that a reader takes as a keyword or a comment, naming the file.
+    for file, name in (("endo.yaml", "ENDO"), ("thermox.yaml", "THERMOX"), ("bang.yaml", "C!H4"),
+                       ("reac.yaml", "REACTIONS")):
+        r = run("fit", species(file, name), "-o", os.path.join(tmp, "out.dat"))
+        check(f"fit refuses the NASA-7 name {name}", r.returncode == 2 and r.stderr.startswith(file) is False and
+              file in r.stderr and len(r.stderr.strip().splitlines()) == 1, r.stderr)
+    # A 100,000-character name is cut in messages.
+    r = run("fit", species("long.yaml", "N" * 100000))
+    check("long name cut in the error line", r.returncode == 2 and len(r.stderr) < 2000 and "long.yaml" in r.stderr,
+          r.stderr[:200])
+    # CSV fields quoted per RFC 4180.
+    import csv
+    import io
+    for sub in (["table", "--temps", "300"], ["inspect"], ["modes", "--temps", "300"]):
+        r = run(*sub, species("comma.yaml", 'a,b "c"'), "--format", "csv")
+        rows = list(csv.reader(io.StringIO(r.stdout)))
+        check(f"{sub[0]} CSV quotes a name with a comma", r.returncode == 0 and len(rows) > 1 and
+              all(len(row) == len(rows[0]) for row in rows) and rows[1][0] == 'a,b "c"', r.stdout[:300])
+
 sys.exit(checks.finish())

@@ -1,0 +1,49 @@
+// The documented ranges of every number vibtherm accepts (README "Limits"): a value
+// outside them is refused with a located one-line error instead of reaching the engine,
+// where it would overflow, underflow or exhaust memory.
+#pragma once
+
+#include <string>
+#include <string_view>
+
+#include "vibtherm/error.hpp"
+#include "vibtherm/species.hpp"
+
+namespace vibtherm::limits {
+
+inline constexpr double min_temperature_K = 1.0;    // below it the classical rotor and the
+inline constexpr double max_temperature_K = 1e5;    // rigid models are meaningless anyway
+inline constexpr double min_wavenumber_cm1 = 1e-2;  // |ν̃|, after scaling
+inline constexpr double max_wavenumber_cm1 = 1e5;
+inline constexpr double min_frequency_scale = 0.1;
+inline constexpr double max_frequency_scale = 10.0;
+inline constexpr double min_pressure_Pa = 1e-6;
+inline constexpr double max_pressure_Pa = 1e9;
+inline constexpr double max_electronic_energy_cm1 = 1e6;  // about 124 eV
+inline constexpr int max_degeneracy = 1000000;
+inline constexpr double min_mass_amu = 0.5;  // a species' or an atom's mass
+inline constexpr double max_mass_amu = 1e6;
+inline constexpr double max_coordinate_angstrom = 1e4;
+inline constexpr double min_moment_amu_A2 = 1e-6;
+inline constexpr double max_moment_amu_A2 = 1e12;
+inline constexpr double max_enthalpy_of_formation_J_per_mol = 1e8;  // |ΔfH°| ≤ 100,000 kJ/mol
+inline constexpr double max_rotor_energy_J_per_mol = 1e6;           // barrier and scan, 1000 kJ/mol
+inline constexpr int max_symmetry_number = 1000;
+inline constexpr double min_grid_step_K = 0.1;
+inline constexpr std::size_t max_grid_points = 200000;
+
+// Refuses a species whose numbers leave the ranges above (location: the species file).
+void check_species(const Species& species);
+
+// `value` must be finite and within [low, high]; else InputError at `where` saying
+// "<what> is <value>, expected <low> to <high> <unit>".
+void check_range(double value, double low, double high, std::string_view what, std::string_view unit,
+                 const SourceLocation& where = {});
+
+// A temperature of a table, a fit grid or a breakpoint.
+void check_temperature(double T_K, std::string_view what, const SourceLocation& where = {});
+
+// `name` for a message: at most 60 characters, then "..." and the count.
+std::string display_name(std::string_view name);
+
+}  // namespace vibtherm::limits
