@@ -16,18 +16,10 @@ namespace {
 
 constexpr double R = constants::gas_constant_J_per_mol_K;
 
-struct MotionRef {
-  const char* name;
-  const MotionTerms ThermoPoint::*terms;
-};
-constexpr std::array<MotionRef, 5> motions{{{"translation", &ThermoPoint::translation},
-                                            {"rotation", &ThermoPoint::rotation},
-                                            {"vibration", &ThermoPoint::vibration},
-                                            {"hindered_rotors", &ThermoPoint::internal_rotation},
-                                            {"electronic", &ThermoPoint::electronic}}};
+constexpr const auto& motions = motion_parts;
 
 // Text breakdown columns carry the motion's name, as in CSV and JSON ("Cp.hindered_rotors").
-std::size_t column_width(const MotionRef& m) {
+std::size_t column_width(const MotionPart& m) {
   return std::max<std::size_t>(8, 3 + std::string_view(m.name).size());
 }
 

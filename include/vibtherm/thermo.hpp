@@ -3,6 +3,7 @@
 // adsorbate) functions at any temperature, with the per-motion breakdown.
 #pragma once
 
+#include <array>
 #include <optional>
 #include <string>
 #include <vector>
@@ -86,6 +87,18 @@ struct ThermoPoint {
   double G_minus_H298_J_per_mol = 0.0;
   double gibbs_function_J_per_mol_K = 0.0;  // −[G(T) − H(298.15 K)] / T
 };
+
+// The motions of a ThermoPoint by their output name, in output order (every writer's
+// per-motion breakdown uses this one list, so a part has one name everywhere).
+struct MotionPart {
+  const char* name;
+  const MotionTerms ThermoPoint::*terms;
+};
+inline constexpr std::array<MotionPart, 5> motion_parts{{{"translation", &ThermoPoint::translation},
+                                                         {"rotation", &ThermoPoint::rotation},
+                                                         {"vibration", &ThermoPoint::vibration},
+                                                         {"hindered_rotors", &ThermoPoint::internal_rotation},
+                                                         {"electronic", &ThermoPoint::electronic}}};
 
 ThermoPoint evaluate(const PreparedSpecies& prepared, double T_K);
 std::vector<ThermoPoint> tabulate(const PreparedSpecies& prepared, const std::vector<double>& temperatures_K);

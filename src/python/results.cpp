@@ -17,15 +17,7 @@ namespace {
 
 constexpr double R = constants::gas_constant_J_per_mol_K;
 
-struct MotionRef {
-  const char* name;
-  const MotionTerms ThermoPoint::*terms;
-};
-constexpr std::array<MotionRef, 5> motions{{{"translation", &ThermoPoint::translation},
-                                            {"rotation", &ThermoPoint::rotation},
-                                            {"vibration", &ThermoPoint::vibration},
-                                            {"hindered_rotors", &ThermoPoint::internal_rotation},
-                                            {"electronic", &ThermoPoint::electronic}}};
+constexpr const auto& motions = motion_parts;
 
 // One column of `rows`, computed as the JSON writers compute it, so the numbers are the
 // same doubles.
