@@ -91,6 +91,14 @@ struct Species {
   int symmetry_number = 1;
   std::vector<ElectronicLevel> electronic_levels{{0.0, 1}};
   std::optional<double> enthalpy_of_formation_J_per_mol;  // ΔfH°(298.15 K)
+  // Total electronic energy at the equilibrium geometry (input key `electronic_energy`,
+  // hartree when bare; or a QC exchange file), molar: formation.hpp turns it into ΔfH°.
+  std::optional<double> electronic_energy_J_per_mol;
+  int charge = 0;  // net charge in elementary charges (input key `charge`, or a QC exchange file)
+  // What the reader wants the user told (a QC file's method and basis, modes it dropped):
+  // prepare_species passes them on as notes.
+  std::vector<std::string> reader_notes;
+  std::string computed_with;  // a QC exchange file's method/basis ("B3LYP/def2-TZVP"); empty: unknown
   Phase phase = Phase::gas;
   // Adsorbate only: the site's element symbol (e.g. "Pt"), added once to the composition of
   // the NASA record as surface-kinetics files expect; not part of the molar mass. Empty: none.
