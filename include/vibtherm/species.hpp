@@ -94,6 +94,12 @@ struct Species {
   // Total electronic energy at the equilibrium geometry (input key `electronic_energy`,
   // hartree when bare; or a QC exchange file), molar: formation.hpp turns it into ΔfH°.
   std::optional<double> electronic_energy_J_per_mol;
+  // Method file (input key `method`, resolved against the species file's folder; empty: none)
+  // whose atomic energies make `electronic_energy` an enthalpy of formation (method.hpp).
+  std::string method_file;
+  // Bonds for bond-additivity corrections (input key `bonds`, 0-based atom pairs); when
+  // absent they are perceived from the geometry (bonds.hpp).
+  std::optional<std::vector<std::array<int, 2>>> bonds;
   int charge = 0;  // net charge in elementary charges (input key `charge`, or a QC exchange file)
   // What the reader wants the user told (a QC file's method and basis, modes it dropped):
   // prepare_species passes them on as notes.
