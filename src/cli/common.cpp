@@ -128,16 +128,21 @@ void emit_log(const std::vector<LogLine>& log) {
   for (const auto& line : log) spdlog::log(line.level, "{}", line.text);
 }
 
+PreparedSpecies read_and_prepare(const std::string& path, const ModelOptions& model,
+                                 const std::string& method_file, std::string* bytes) {
+  const Species species = read_species_file(path, bytes);
+  const std::string& method_path = species.method_file.empty() ? method_file : species.method_file;
+  std::optional<Method> method;
+  if (!method_path.empty()) method = read_method_file(method_path);
+  return prepare_with_method(species, model, method ? &*method : nullptr);
+}
+
 std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
                                       const RawProducer& work, std::vector<LogLine>& log,
                                       const std::string& method_file) {
   try {
     std::string bytes;
-    const Species species = read_species_file(path, &bytes);
-    const std::string& method_path = species.method_file.empty() ? method_file : species.method_file;
-    std::optional<Method> method;
-    if (!method_path.empty()) method = read_method_file(method_path);
-    const PreparedSpecies p = prepare_with_method(species, model, method ? &*method : nullptr);
+    const PreparedSpecies p = read_and_prepare(path, model, method_file, &bytes);
     for (const auto& w : p.warnings)
       log.push_back({spdlog::level::warn, fmt::format("{}: {}", p.species.name, w)});
     for (const auto& n : p.notes)

@@ -123,6 +123,11 @@ struct BatchSummary {
 // Outcome<Piece> for one species: read, prepare, then `work` (on a worker thread). An
 // InputError without a file gets the species' file.
 using RawProducer = std::function<void(const SpeciesInput&, std::vector<LogLine>&)>;
+// Reads a species file and prepares it, under its own `method` file or else `method_file`
+// (--method, may be empty); `bytes` receives the file's content when given.
+PreparedSpecies read_and_prepare(const std::string& path, const ModelOptions& model,
+                                 const std::string& method_file, std::string* bytes = nullptr);
+
 // `method_file` (--method) applies to species without a `method` key of their own.
 std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
                                       const RawProducer& work, std::vector<LogLine>& log,
@@ -178,5 +183,6 @@ void setup_fit(CLI::App& sub);
 void setup_eval(CLI::App& sub);
 void setup_modes(CLI::App& sub);
 void setup_report(CLI::App& sub);
+void setup_reaction(CLI::App& sub);
 
 }  // namespace vibtherm::cli
