@@ -28,19 +28,6 @@ std::string standard_state_text(const ModelOptions& m) {
   return fmt::format("p° = {:g} Pa", m.pressure_Pa);
 }
 
-// The species files of a reaction, read and prepared; their warnings logged once each.
-Reaction load_reaction(const ReactionFile& file, const ModelOptions& model, const std::string& method_file) {
-  Reaction r;
-  r.name = file.name;
-  r.origin = file.origin;
-  for (const auto& term : file.terms) {
-    PreparedSpecies p = read_and_prepare(term.path, model, method_file);
-    for (const auto& w : p.warnings) spdlog::warn("{}: {}", p.species.name, w);
-    r.terms.push_back({term.file, std::move(p), term.coefficient});
-  }
-  return r;
-}
-
 }  // namespace
 
 void setup_reaction(CLI::App& sub) {
