@@ -62,6 +62,10 @@ SpeciesFacts describe_species(const PreparedSpecies& p) {
   f.ground_degeneracy = ground;
   f.warnings = p.warnings;
   f.notes = p.notes;
+  f.enthalpy_of_formation_J_per_mol = p.species.enthalpy_of_formation_J_per_mol;
+  if (f.enthalpy_of_formation_J_per_mol)
+    f.enthalpy_of_formation_route =
+        p.enthalpy_of_formation_route.empty() ? std::string("given") : p.enthalpy_of_formation_route;
   if (!p.conformers.empty()) {
     f.population_temperatures_K = {298.15, 500.0, 1000.0};
     for (const ConformerMember& m : p.conformers)

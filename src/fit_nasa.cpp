@@ -309,6 +309,8 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitPlan& plan) {
   out.enthalpy_of_formation_J_per_mol = sp.enthalpy_of_formation_J_per_mol.value_or(0.0);
   if (out.enthalpy_of_formation_missing)
     out.notes.push_back("enthalpy of formation missing: H(298.15 K) set to 0 (--allow-missing-hf)");
+  if (!prepared.enthalpy_of_formation_route.empty())
+    out.notes.push_back("enthalpy of formation from " + prepared.enthalpy_of_formation_route);
 
   const ThermoPoint ref = evaluate(prepared, constants::reference_temperature_K);
   // A hindered rotor's Cv/R passes its free-rotor limit ½ near the barrier-crossing

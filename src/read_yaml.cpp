@@ -49,7 +49,10 @@ const std::vector<std::string> yaml_keys = {"name",
                                             "tunnelling",
                                             "conformers",
                                             "conformer_energies",
-                                            "surface_site"};
+                                            "surface_site",
+                                            "electronic_energy",
+                                            "method",
+                                            "bonds"};
 
 // Keys an ensemble file may hold besides `conformers`: the rest comes from the conformers.
 const std::vector<std::string> ensemble_keys = {
@@ -80,7 +83,37 @@ class YamlReader : public YamlValues {
   int atom_index(const YAML::Node& node, const std::string& what, std::size_t atom_count) const;
   void ensemble(const Entries& e, Species& species) const;
   void read_model_keys(const Entries& e, Species& species) const;
+  void read_energy_keys(const Entries& e, Species& species) const;
 };
+
+// electronic_energy (hartree when bare), method (a file beside this one), bonds (1-based pairs).
+void YamlReader::read_energy_keys(const Entries& e, Species& species) const {
+  if (const YAML::Node* n = find(e, "electronic_energy"))
+    species.electronic_energy_J_per_mol = energy_J_per_mol(*n, "'electronic_energy'", "hartree");
+  if (const YAML::Node* m = find(e, "method")) {
+    const std::filesystem::path given = YamlValues::text(*m, "'method'");
+    species.method_file =
+        (given.is_absolute() ? given : std::filesystem::path(file()).parent_path() / given).string();
+  }
+  if (const YAML::Node* b = find(e, "bonds")) {
+    if (!b->IsSequence())
+      error(*b, "'bonds' is " + describe(*b) + ", expected a list of atom pairs such as [[1, 2], [1, 3]]");
+    std::vector<std::array<int, 2>> bonds;
+    for (std::size_t i = 0; i < b->size(); ++i) {
+      const YAML::Node pair = (*b)[i];
+      const std::string what = fmt::format("bond {}", i + 1);
+      if (!pair.IsSequence() || pair.size() != 2)
+        error(pair, what + " is " + describe(pair) + ", expected two 1-based atom numbers [i, j]");
+      const int a = atom_index(pair[0], what, species.atoms.size());
+      const int c = atom_index(pair[1], what, species.atoms.size());
+      if (a == c)
+        error(pair,
+              what + " joins atom " + std::to_string(a + 1) + " to itself, expected two different atoms");
+      bonds.push_back({a, c});
+    }
+    species.bonds = std::move(bonds);
+  }
+}
 
 // The model keys a species file and an ensemble file share: low_frequency, scale.
 void YamlReader::read_model_keys(const Entries& e, Species& species) const {
@@ -473,6 +506,7 @@ Species YamlReader::read(const std::string& text) {
   if (levels) species.electronic_levels = electronic_levels(*levels);
   if (const YAML::Node* h = find(e, "enthalpy_of_formation"))
     species.enthalpy_of_formation_J_per_mol = energy_J_per_mol(*h, "'enthalpy_of_formation'");
+  read_energy_keys(e, species);
   if (const YAML::Node* p = find(e, "phase")) {
     std::string phase = YamlValues::text(*p, "'phase'");
     if (phase == "gas")

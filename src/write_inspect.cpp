@@ -61,6 +61,10 @@ std::string inspect_text(const std::vector<SpeciesFacts>& all) {
                               f.expected_modes, f.atom_count, f.imaginary_modes));
     line("frequencies", wavenumbers(f.frequencies_cm1) + (f.frequencies_cm1.empty() ? "" : " cm^-1"));
     line("zero-point energy", fmt::format("{:.4f} kJ/mol", f.zero_point_energy_J_per_mol / 1e3));
+    if (f.enthalpy_of_formation_J_per_mol)
+      line("formation enthalpy",
+           fmt::format("{:.3f} kJ/mol at 298.15 K ({})", *f.enthalpy_of_formation_J_per_mol / 1e3,
+                       f.enthalpy_of_formation_route));
     if (f.wigner_kappa_298)
       line("tunnelling 298.15 K",
            fmt::format("kappa Wigner {:.4f}, Eckart {}", *f.wigner_kappa_298,
@@ -118,6 +122,10 @@ std::string inspect_json(const std::vector<SpeciesFacts>& all) {
     s["symmetry_number"] = f.symmetry_number;
     s["frequencies"] = f.frequencies_cm1;
     s["zpe"] = f.zero_point_energy_J_per_mol / 1e3;
+    if (f.enthalpy_of_formation_J_per_mol) {
+      s["enthalpy_of_formation"] = *f.enthalpy_of_formation_J_per_mol / 1e3;
+      s["enthalpy_of_formation_route"] = f.enthalpy_of_formation_route;
+    }
     s["formula"] = f.formula;
     s["phase"] = f.phase;
     s["molar_mass"] = f.molar_mass_g_per_mol;

@@ -5,6 +5,9 @@
 
 #include <algorithm>
 #include <charconv>
+#include <filesystem>
+#include <fstream>
+#include <iterator>
 #include <set>
 #include <sstream>
 
@@ -61,6 +64,25 @@ YAML::Node load_single_yaml_document(const std::string& text, const std::string&
     if (!e.mark.is_null()) where = {file_name, e.mark.line + 1, e.mark.column + 1};
     fail(where, "malformed YAML: " + e.msg + ", " + expected);
   }
+}
+
+std::string read_input_text_file(const std::string& path, const std::string& what) {
+  namespace fs = std::filesystem;
+  std::error_code ec;
+  const fs::file_status status = fs::status(path, ec);
+  if (fs::is_directory(status)) fail({path, 0, 0}, "is a directory, expected " + what);
+  if (fs::exists(status) && !fs::is_regular_file(status))
+    fail({path, 0, 0}, "is not a regular file (a device, FIFO or socket), expected " + what);
+  std::ifstream in(path, std::ios::binary);
+  if (!in) fail({path, 0, 0}, "cannot read file (missing or not readable), expected " + what);
+  constexpr std::uintmax_t max_bytes = 32u << 20;
+  const auto size = fs::file_size(path, ec);
+  if (!ec && size > max_bytes) fail({path, 0, 0}, "file has more than 32 MiB, expected " + what);
+  std::string text((std::istreambuf_iterator<char>(in)), std::istreambuf_iterator<char>());
+  if (in.bad()) fail({path, 0, 0}, "error while reading file");
+  if (text.find_first_not_of(" \t\r\n") == std::string::npos)
+    fail({path, 0, 0}, "file is empty, expected " + what);
+  return text;
 }
 
 SourceLocation YamlValues::at(const YAML::Node& node) const {
@@ -209,21 +231,28 @@ std::vector<YamlValues::Located> YamlValues::wavenumbers(const YAML::Node& node,
                   ", expected a list of numbers in cm^-1 or {values: [...], unit: ...}");
 }
 
-double YamlValues::energy_J_per_mol(const YAML::Node& node, const std::string& what) const {
+double YamlValues::energy_J_per_mol(const YAML::Node& node, const std::string& what,
+                                    const std::string& bare_unit) const {
+  double v = 0.0;
+  std::string u = bare_unit;
+  const YAML::Node* at_node = &node;
   if (node.IsMap()) {
     Entries e = entries(node, what, {"value", "unit"});
     const YAML::Node* value = find(e, "value");
     const YAML::Node* unit = find(e, "unit");
-    if (!value) error(node, what + " has no 'value', expected {value: number, unit: kJ/mol}");
-    double v = number(*value, what);
-    if (!unit) return v * 1e3;
-    std::string u = text(*unit, "'unit'");
-    std::optional<double> J_per_mol = to_energy_J_per_mol(v, u);
-    if (!J_per_mol)
-      error(*unit, "unknown energy unit " + quote(u) + ", expected one of " + energy_units_list());
-    return *J_per_mol;
+    if (!value) error(node, what + " has no 'value', expected {value: number, unit: " + bare_unit + "}");
+    v = number(*value, what);
+    if (unit) {
+      u = text(*unit, "'unit'");
+      at_node = unit;
+    }
+  } else {
+    v = number(node, what);  // bare number: kJ/mol for enthalpies (design.md section 4)
   }
-  return number(node, what) * 1e3;  // bare number: kJ/mol (design.md section 4)
+  std::optional<double> J_per_mol = to_energy_J_per_mol(v, u);
+  if (!J_per_mol)
+    error(*at_node, "unknown energy unit " + quote(u) + ", expected one of " + energy_units_list());
+  return *J_per_mol;
 }
 
 ScaleFactors YamlValues::scale_factors(const YAML::Node& node, const std::string& what) const {

@@ -21,6 +21,10 @@ namespace vibtherm {
 YAML::Node load_single_yaml_document(const std::string& text, const std::string& file_name,
                                      const std::string& expected, const std::string& one_per_file);
 
+// The text of a small input file (method or reaction file, `what` names it in messages):
+// a regular, readable, non-empty file of at most 32 MiB, else InputError at the path.
+std::string read_input_text_file(const std::string& path, const std::string& what);
+
 class YamlValues {
  public:
   explicit YamlValues(const std::string& file_name) : file_(file_name) {}
@@ -65,8 +69,10 @@ class YamlValues {
   // A list of wavenumbers: [numbers or {value, unit}], or {values: [...], unit} or
   // {value, unit}; a bare number too when `allow_single`. Converted to cm^-1.
   std::vector<Located> wavenumbers(const YAML::Node& node, const std::string& what, bool allow_single) const;
-  // An energy per mole: a bare number in kJ/mol, or {value, unit} in any energy unit. J/mol.
-  double energy_J_per_mol(const YAML::Node& node, const std::string& what) const;
+  // An energy per mole: a bare number in `bare_unit` (kJ/mol unless said), or {value, unit}
+  // in any energy unit (the unit defaults to `bare_unit` too). J/mol.
+  double energy_J_per_mol(const YAML::Node& node, const std::string& what,
+                          const std::string& bare_unit = "kJ/mol") const;
   // Frequency scale factors per quantity, the map {zpe, enthalpy, entropy} (each optional,
   // positive) of a species file's or a method file's `scale` (design.md section 4).
   ScaleFactors scale_factors(const YAML::Node& node, const std::string& what) const;

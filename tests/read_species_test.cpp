@@ -399,3 +399,24 @@ TEST_CASE("unit maps hold lists and rotor energies; species keys keep their loca
   REQUIRE(scanned.hindered_rotors[0].scan.size() == 4);
   CHECK(scanned.hindered_rotors[0].scan[2].energy_J_per_mol == doctest::Approx(2.87 * 4184.0));
 }
+
+TEST_CASE("YAML: electronic_energy, method and bonds") {
+  const std::string base =
+      "name: w\natoms:\n  - [O, 0, 0, 0.1173]\n  - [H, 0, 0.7572, -0.4692]\n  - [H, 0, -0.7572, -0.4692]\n"
+      "frequencies: [1595, 3657, 3756]\n";
+  const double Eh = constants::hartree_J * constants::avogadro_per_mol;  // CODATA 2018
+  Species s = read_species_yaml(
+      base + "electronic_energy: -76.4089\nmethod: b3lyp.yaml\nbonds: [[1, 2], [1, 3]]\n", "dir/w.yaml");
+  CHECK(*s.electronic_energy_J_per_mol == doctest::Approx(-76.4089 * Eh));
+  CHECK(std::filesystem::path(s.method_file) == std::filesystem::path("dir") / "b3lyp.yaml");
+  REQUIRE(s.bonds);
+  CHECK(s.bonds->size() == 2);
+  CHECK((*s.bonds)[1][1] == 2);
+  s = read_species_yaml(base + "electronic_energy: {value: -200000, unit: kJ/mol}\n", "w.yaml");
+  CHECK(*s.electronic_energy_J_per_mol == doctest::Approx(-2e8));
+  CHECK(yaml_error(base + "bonds: [[1, 1]]\n").find("joins atom 1 to itself") != std::string::npos);
+  CHECK(yaml_error(base + "bonds: [[1, 4]]\n").find("expected an atom number from 1 to 3") !=
+        std::string::npos);
+  CHECK(yaml_error(base + "electronic_energy: {value: 1, unit: Eh}\n").find("unknown energy unit 'Eh'") !=
+        std::string::npos);
+}

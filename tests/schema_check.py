@@ -56,12 +56,30 @@ def main():
     jsonschema.Draft202012Validator.check_schema(schema)
     validator = jsonschema.Draft202012Validator(schema)
 
+    # Method files (a top-level 'elements') and reaction files (a top-level 'species' list)
+    # have schemas of their own.
+    others = {}
+    for kind, name in (("method", "method"), ("reaction", "reaction_file")):
+        path = root / "schemas" / f"{name}.schema.json"
+        if path.exists():
+            other = json.loads(path.read_text(encoding="utf-8"))
+            jsonschema.Draft202012Validator.check_schema(other)
+            others[kind] = jsonschema.Draft202012Validator(other)
+
+    def validator_for(document):
+        if isinstance(document, dict) and "elements" in document and "method" in others:
+            return others["method"]
+        if isinstance(document, dict) and isinstance(document.get("species"), list) and "reaction" in others:
+            return others["reaction"]
+        return validator
+
     failures = []
     good = sorted(root.glob("examples/**/*.yaml")) + sorted(root.glob("examples/**/*.yml"))
     good += sorted((root / "tests" / "data").glob("*.yaml"))
     good += sorted((root / "validation" / "species").glob("*.yaml"))
     for path in good:
-        errors = sorted(validator.iter_errors(load(path)), key=lambda e: list(e.path))
+        document = load(path)
+        errors = sorted(validator_for(document).iter_errors(document), key=lambda e: list(e.path))
         for e in errors:
             where = "/".join(str(p) for p in e.path) or "(top level)"
             failures.append(f"{path.relative_to(root)}: {where}: {e.message}")
@@ -69,7 +87,8 @@ def main():
     rejects = SCHEMA_REJECTS
     for name in rejects:
         path = root / "tests" / "bad" / name
-        if validator.is_valid(load(path)):
+        document = load(path)
+        if validator_for(document).is_valid(document):
             failures.append(f"tests/bad/{name}: accepted by the schema, expected a rejection")
 
     for f in failures:

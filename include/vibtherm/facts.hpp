@@ -42,8 +42,10 @@ struct SpeciesFacts {
   std::vector<std::string> notes;
   std::vector<double> population_temperatures_K;  // 298.15, 500, 1000 K for ensembles
   std::vector<ConformerFacts> conformers;
-  std::optional<double> wigner_kappa_298;  // transition states
-  std::optional<double> eckart_kappa_298;  // with barrier heights
+  std::optional<double> wigner_kappa_298;                 // transition states
+  std::optional<double> eckart_kappa_298;                 // with barrier heights
+  std::optional<double> enthalpy_of_formation_J_per_mol;  // ΔfH°(298.15 K), given or computed
+  std::string enthalpy_of_formation_route;                // "given", or how it was computed
 };
 
 SpeciesFacts describe_species(const PreparedSpecies& prepared);

@@ -91,6 +91,15 @@ struct Species {
   int symmetry_number = 1;
   std::vector<ElectronicLevel> electronic_levels{{0.0, 1}};
   std::optional<double> enthalpy_of_formation_J_per_mol;  // ΔfH°(298.15 K)
+  // Total electronic energy at the equilibrium geometry (input key `electronic_energy`,
+  // hartree when bare; or a QC exchange file), molar: formation.hpp turns it into ΔfH°.
+  std::optional<double> electronic_energy_J_per_mol;
+  // Method file (input key `method`, resolved against the species file's folder; empty: none)
+  // whose atomic energies make `electronic_energy` an enthalpy of formation (method.hpp).
+  std::string method_file;
+  // Bonds for bond-additivity corrections (input key `bonds`, 0-based atom pairs); when
+  // absent they are perceived from the geometry (bonds.hpp).
+  std::optional<std::vector<std::array<int, 2>>> bonds;
   Phase phase = Phase::gas;
   // Adsorbate only: the site's element symbol (e.g. "Pt"), added once to the composition of
   // the NASA record as surface-kinetics files expect; not part of the molar mass. Empty: none.

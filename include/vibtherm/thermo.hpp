@@ -52,6 +52,9 @@ struct PreparedSpecies {
   double H298_minus_H0_J_per_mol = 0.0;      // thermal enthalpy at 298.15 K, the table's reference
   std::vector<std::string> warnings;         // things the user must see
   std::vector<std::string> notes;            // model choices worth stating
+  // How species.enthalpy_of_formation was computed (formation.hpp), e.g. "atomization with
+  // method 'X'"; empty when it was given or is absent.
+  std::string enthalpy_of_formation_route;
   // An ensemble (species.conformers): its members; the fields above then describe the
   // member with the lowest zero-point level, except name, origin, ΔfH°, ZPE and H298.
   std::vector<ConformerMember> conformers;

@@ -11,7 +11,9 @@
 #include <iostream>
 
 #include "vibtherm/error.hpp"
+#include "vibtherm/formation.hpp"
 #include "vibtherm/limits.hpp"
+#include "vibtherm/read_method.hpp"
 #include "vibtherm/read_species.hpp"
 #include "vibtherm/temperatures.hpp"
 #include "vibtherm/units.hpp"
@@ -64,6 +66,9 @@ void add_common_options(CLI::App& sub, CommonOptions& o, bool with_temps,
                  "treat imaginary wavenumbers smaller than this (cm^-1) as real, with a warning");
   sub.add_flag("--allow-mode-count-mismatch", o.mode_count_warning,
                "warn instead of failing when the number of frequencies is not 3N-6 / 3N-5");
+  sub.add_option("--method", o.method_file,
+                 "method file (atomic energies, bond corrections, scale factors) for species with an "
+                 "electronic_energy and no 'method' key of their own: gives their enthalpy of formation");
   add_jobs_option(sub, o.jobs);
 }
 
@@ -124,10 +129,15 @@ void emit_log(const std::vector<LogLine>& log) {
 }
 
 std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
-                                      const RawProducer& work, std::vector<LogLine>& log) {
+                                      const RawProducer& work, std::vector<LogLine>& log,
+                                      const std::string& method_file) {
   try {
     std::string bytes;
-    const PreparedSpecies p = prepare_species(read_species_file(path, &bytes), model);
+    const Species species = read_species_file(path, &bytes);
+    const std::string& method_path = species.method_file.empty() ? method_file : species.method_file;
+    std::optional<Method> method;
+    if (!method_path.empty()) method = read_method_file(method_path);
+    const PreparedSpecies p = prepare_with_method(species, model, method ? &*method : nullptr);
     for (const auto& w : p.warnings)
       log.push_back({spdlog::level::warn, fmt::format("{}: {}", p.species.name, w)});
     for (const auto& n : p.notes)

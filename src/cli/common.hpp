@@ -45,7 +45,8 @@ struct CommonOptions {
   bool transition_state = false;
   double imaginary_as_real_below_cm1 = 0.0;
   bool mode_count_warning = false;
-  unsigned jobs = 0;  // 0: every core
+  unsigned jobs = 0;        // 0: every core
+  std::string method_file;  // --method: for species without their own `method` key
 };
 
 // Adds -j/--jobs (species processed at once; default every core) to a subcommand.
@@ -122,8 +123,10 @@ struct BatchSummary {
 // Outcome<Piece> for one species: read, prepare, then `work` (on a worker thread). An
 // InputError without a file gets the species' file.
 using RawProducer = std::function<void(const SpeciesInput&, std::vector<LogLine>&)>;
+// `method_file` (--method) applies to species without a `method` key of their own.
 std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
-                                      const RawProducer& work, std::vector<LogLine>& log);
+                                      const RawProducer& work, std::vector<LogLine>& log,
+                                      const std::string& method_file = "");
 void emit_log(const std::vector<LogLine>& log);
 
 // Expands the paths, then reads, prepares and runs `work` on every species on o.jobs
@@ -142,7 +145,8 @@ BatchSummary for_each_species(const CommonOptions& o, const std::vector<std::str
         Outcome<Piece> out;
         out.error = run_species(
             paths[i], model,
-            [&](const SpeciesInput& in, std::vector<LogLine>& log) { out.piece = work(in, log); }, out.log);
+            [&](const SpeciesInput& in, std::vector<LogLine>& log) { out.piece = work(in, log); }, out.log,
+            o.method_file);
         return out;
       },
       [&](std::size_t, Outcome<Piece>& out) {

@@ -80,7 +80,12 @@ def main():
             continue
         expected = expected_path.read_text(encoding="utf-8").strip()
         subcommand = "eval" if path.suffix == ".dat" else "table"
-        run_case(exe, bad_dir, [path.name], expected, path.name, failures, subcommand)
+        args = [path.name]
+        if path.name.startswith("method_"):  # a method file, applied to a species with energies
+            args = ["../data/water-energies-no-method.yaml", "--method", path.name]
+        elif path.name.startswith("reaction_"):  # a reaction file
+            subcommand = "reaction"
+        run_case(exe, bad_dir, args, expected, path.name, failures, subcommand)
     for args, expected in ARGUMENT_CASES:
         run_case(exe, bad_dir, args, expected, " ".join(args), failures)
     for args, expected in FIT_ARGUMENT_CASES:
