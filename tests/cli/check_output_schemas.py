@@ -30,6 +30,12 @@ cases += [
     ("inspect.schema.json", ["inspect", *extensions, "--format", "json"]),
     ("modes.schema.json", ["modes", *extensions, "--format", "json"]),
 ]
+# Reactions: the JANAF checks, with the ln K fit.
+reactions = os.path.join(root, "validation", "reactions")
+cases += [
+    ("reaction.schema.json", ["reaction", os.path.join(reactions, "water-dissociation.yaml"),
+                              os.path.join(reactions, "dinitrogen-tetroxide.yaml"), "--format", "json", "--fit-lnk"]),
+]
 passed = failed = 0
 for schema_name, args in cases:
     schema_path = os.path.join(root, "schemas", schema_name)
