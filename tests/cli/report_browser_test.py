@@ -6,6 +6,10 @@ the script ran has every species section and the sortable index.
 
 Screenshots are kept in BUILD_DIR/screenshots/ for a person to look at.
 
+The index is then sorted the way a reader sorts it: Chromium is driven over its DevTools
+protocol (python3-websocket), a real mouse click is sent at the centre of a column heading,
+and the order of the rows is read back and compared with the order the numbers demand.
+
 Usage: report_browser_test.py VIBTHERM_EXE PROJECT_ROOT BUILD_DIR
 """
 import os
@@ -14,6 +18,8 @@ import shutil
 import subprocess
 import sys
 import tempfile
+import time
+import urllib.request
 
 from PIL import Image, ImageStat
 
@@ -79,6 +85,67 @@ def species_names(args):
     return [s["name"] for s in json.loads(result.stdout)["species"]]
 
 
+def click_sort(page, tmp):
+    """Clicks the S° and then the species heading of the index in a live Chromium page;
+    returns [(label, names after the click, expected order, names before)]."""
+    import json
+    import websocket  # python3-websocket
+
+    profile = tempfile.mkdtemp(dir=tmp, prefix="profile-")
+    proc = subprocess.Popen([chromium, "--headless", "--no-sandbox", "--disable-gpu", "--no-first-run",
+                             "--remote-debugging-port=0", f"--user-data-dir={profile}", "--window-size=1200,900",
+                             "file://" + page], stdout=subprocess.DEVNULL, stderr=subprocess.DEVNULL)
+    try:
+        port_file = os.path.join(profile, "DevToolsActivePort")
+        for _ in range(300):
+            if os.path.exists(port_file) and open(port_file).read().strip():
+                break
+            time.sleep(0.1)
+        port = open(port_file).read().split()[0]
+        targets = json.load(urllib.request.urlopen(f"http://127.0.0.1:{port}/json"))
+        ws = websocket.create_connection(next(t for t in targets if t["type"] == "page")["webSocketDebuggerUrl"],
+                                         timeout=60)
+        ids = iter(range(1, 1000))
+
+        def call(method, **params):
+            i = next(ids)
+            ws.send(json.dumps({"id": i, "method": method, "params": params}))
+            while True:
+                reply = json.loads(ws.recv())
+                if reply.get("id") == i:
+                    return reply.get("result", {})
+
+        def evaluate(expression):
+            return call("Runtime.evaluate", expression=expression, returnByValue=True)["result"]["value"]
+
+        for _ in range(300):
+            if evaluate("document.readyState === 'complete' && document.querySelector('#index.sortable') !== null"):
+                break
+            time.sleep(0.1)
+        rows_js = ("Array.from(document.querySelectorAll('#index tbody tr')).map(r => "
+                   "[r.cells[0].textContent, r.cells[3].textContent])")
+        before = [n for n, _ in evaluate(rows_js)]  # the default order: warnings and worst fits first
+        results = []
+        for label, column in (("S° heading", 3), ("species heading", 0)):
+            box = evaluate(f"(() => {{ const th = document.querySelector('#index thead th:nth-child({column + 1})');"
+                           "th.scrollIntoView(); const r = th.getBoundingClientRect();"
+                           "return [r.left + r.width / 2, r.top + r.height / 2]; })()")
+            for kind in ("mousePressed", "mouseReleased"):
+                call("Input.dispatchMouseEvent", type=kind, x=box[0], y=box[1], button="left", clickCount=1)
+            rows = evaluate(rows_js)
+            if column == 3:  # numbers: the first click sorts the largest first
+                expected = [n for n, _ in sorted(rows, key=lambda r: -float(r[1]))]
+            else:
+                expected = sorted(n for n, _ in rows)
+            results.append((label, [n for n, _ in rows], expected, before))
+            before = [n for n, _ in rows]
+        ws.close()
+        return results
+    finally:
+        proc.kill()
+        proc.wait()
+
+
 if not os.path.exists(chromium):
     print("FAIL: chromium is not installed (scripts/install-deps installs it)")
     sys.exit(1)
@@ -92,6 +159,10 @@ with tempfile.TemporaryDirectory() as tmp:
     check(0 < size < 400_000, f"demo report is {size} bytes, expected under 400 kB")
     print(f"demo report: {size} bytes")
     render("demo-report", demo, 30000, species_names([examples]), tmp)
+    for label, got, expected, before in click_sort(demo, tmp):
+        check(got == expected and len(got) > 1, f"click on the {label}: rows {got}, expected {expected}")
+        check(before != expected, f"click on the {label}: the order before the click was already {before}")
+        print(f"click on the {label}: {got}")
 
     # A layout fixture, not a molecule: 22 atoms' worth (60 modes) of wavenumbers spread
     # geometrically from 40 to 3600 cm^-1 on a rigid rotor given by its moments.
