@@ -20,9 +20,11 @@ cases = [
     ("modes.schema.json", ["modes", examples, "--format", "json"]),
     ("fit.schema.json", ["fit", examples, "--form", "json"]),
 ]
-# The model extensions: a qrrho species, a transition state with tunnelling, an ensemble.
+# The model extensions: a qrrho species, a transition state with tunnelling, an ensemble,
+# an adsorbate (no rotor facts).
 data = os.path.join(root, "tests", "data")
-extensions = [os.path.join(data, f) for f in ("model-soft-mode.yaml", "model-ts-symmetric.yaml", "model-conformers.yaml")]
+extensions = [os.path.join(data, f) for f in ("model-soft-mode.yaml", "model-ts-symmetric.yaml", "model-conformers.yaml",
+                                                     "adsorbed-water.yaml")]
 cases += [
     ("table.schema.json", ["table", *extensions, "--format", "json", "--breakdown", "--temps", "300,1000"]),
     ("inspect.schema.json", ["inspect", *extensions, "--format", "json"]),
