@@ -142,12 +142,18 @@ PreparedSpecies read_and_prepare(const std::string& path, const ModelOptions& mo
   return prepare_with_method(species, model, method ? &*method : nullptr);
 }
 
-Reaction load_reaction(const ReactionFile& file, const ModelOptions& model, const std::string& method_file) {
+Reaction load_reaction(const ReactionFile& file, const ModelOptions& model, const std::string& method_file,
+                       const ReactionFormations* formations) {
   Reaction r;
   r.name = file.name;
   r.origin = file.origin;
   for (const auto& term : file.terms) {
     PreparedSpecies p = read_and_prepare(term.path, model, method_file);
+    if (formations) {
+      std::error_code ec;
+      const auto it = formations->find(std::filesystem::weakly_canonical(term.path, ec).string());
+      if (it != formations->end()) apply_reaction_formation(p, it->second.dfH298_J_per_mol, it->second.route);
+    }
     for (const auto& w : p.warnings) spdlog::warn("{}: {}", p.species.name, w);
     r.terms.push_back({term.file, std::move(p), term.coefficient});
   }

@@ -141,7 +141,9 @@ PreparedSpecies read_and_prepare(const std::string& path, const ModelOptions& mo
                                  const std::string& method_file, std::string* bytes = nullptr);
 
 // The species files of a reaction file, read and prepared (their warnings logged once each).
-Reaction load_reaction(const ReactionFile& file, const ModelOptions& model, const std::string& method_file);
+// `formations` (--formation-reactions, may be null) gives the species its reaction-set ΔfH°.
+Reaction load_reaction(const ReactionFile& file, const ModelOptions& model, const std::string& method_file,
+                       const ReactionFormations* formations = nullptr);
 
 // Solves every reaction of options.formation_reactions (each needs `unknown`).
 ReactionFormations formations_from_reactions(const CommonOptions& options, const ModelOptions& model);

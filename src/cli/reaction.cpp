@@ -40,11 +40,12 @@ void setup_reaction(CLI::App& sub) {
     const auto temps = temperatures_or(c, default_table_temperatures());
     const ModelOptions model = model_options(c);
     check_output_is_not_input(c.output, c.inputs, "-o");
+    const ReactionFormations formations = formations_from_reactions(c, model);
     ReactionReport report;
     report.standard_state = standard_state_text(model);
     for (const std::string& path : c.inputs) {
       const ReactionFile file = read_reaction_file(path);
-      const Reaction reaction = load_reaction(file, model, c.method_file);
+      const Reaction reaction = load_reaction(file, model, c.method_file, &formations);
       ReactionResult result{reaction_table(reaction, temps), {}, {}, {}};
       if (o->fit_ln_K) {
         result.fit_Kp = fit_ln_K(result.table.rows, false);
