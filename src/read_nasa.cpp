@@ -69,7 +69,7 @@ std::vector<Number> scan_numbers(std::string_view text, int first_column, int& s
     if (t[p] == '+') ++p;
     double v = 0.0;
     auto [ptr, ec] = std::from_chars(t.data() + p, t.data() + t.size(), v);
-    if (ec != std::errc() || (p > start && t[p] == '-')) {
+    if (ec != std::errc() || (p > start && t[p] == '-') || !std::isfinite(v)) {  // nan/inf: not numbers
       stop_column = first_column + static_cast<int>(start);
       return out;
     }
