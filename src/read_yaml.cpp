@@ -58,12 +58,6 @@ const std::vector<std::string> yaml_keys = {"name",
 const std::vector<std::string> ensemble_keys = {
     "name", "conformers", "conformer_energies", "enthalpy_of_formation", "low_frequency", "scale"};
 
-// A full Hessian may differ from its transpose by this much, relative to its largest
-// element, and is then symmetrised: finite-difference Hessians and values printed to five
-// or six significant digits are slightly asymmetric, while a misordered or transposed
-// block is asymmetric at the size of the elements themselves.
-constexpr double hessian_symmetry_tolerance = 1e-4;
-
 class YamlReader : public YamlValues {
  public:
   explicit YamlReader(const std::string& file_name) : YamlValues(file_name) {}
@@ -341,29 +335,16 @@ std::vector<double> YamlReader::hessian(const YAML::Node& node, const YAML::Node
     values.push_back(number(item, "Hessian value " + std::to_string(values.size() + 1)));
     nodes.push_back(item);
   }
-  std::vector<double> out(full);
-  if (values.size() == triangle) {
-    std::size_t k = 0;
-    for (std::size_t i = 0; i < n; ++i)
-      for (std::size_t j = 0; j <= i; ++j, ++k) out[i * n + j] = out[j * n + i] = values[k] * factor;
-    return out;
+  if (values.size() == triangle) return hessian_from_lower_triangle(values, n, factor);
+  if (const auto ij = hessian_asymmetry(values, n)) {
+    const auto [i, j] = *ij;
+    error(nodes[i * n + j], "'hessian' is not symmetric: row " + std::to_string(i + 1) + ", column " +
+                                std::to_string(j + 1) + " is " + quote(nodes[i * n + j].Scalar()) +
+                                " but row " + std::to_string(j + 1) + ", column " + std::to_string(i + 1) +
+                                " is " + quote(nodes[j * n + i].Scalar()) +
+                                ", expected equal values (within 1e-4 of the largest element)");
   }
-  double largest = 0.0;
-  for (double v : values) largest = std::max(largest, std::abs(v));
-  for (std::size_t i = 0; i < n; ++i)
-    for (std::size_t j = 0; j < i; ++j) {
-      const double lower = values[i * n + j];
-      const double upper = values[j * n + i];
-      if (std::abs(lower - upper) > hessian_symmetry_tolerance * largest)
-        error(nodes[i * n + j], "'hessian' is not symmetric: row " + std::to_string(i + 1) + ", column " +
-                                    std::to_string(j + 1) + " is " + quote(nodes[i * n + j].Scalar()) +
-                                    " but row " + std::to_string(j + 1) + ", column " +
-                                    std::to_string(i + 1) + " is " + quote(nodes[j * n + i].Scalar()) +
-                                    ", expected equal values (within 1e-4 of the largest element)");
-      out[i * n + j] = out[j * n + i] = 0.5 * (lower + upper) * factor;
-    }
-  for (std::size_t i = 0; i < n; ++i) out[i * n + i] = values[i * n + i] * factor;
-  return out;
+  return symmetrised_hessian(values, n, factor);
 }
 
 Species YamlReader::read(const std::string& text) {
