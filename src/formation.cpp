@@ -36,6 +36,11 @@ FormationEnthalpy atomization_formation_enthalpy(const PreparedSpecies& prepared
          fmt::format("species '{}' has no 'electronic_energy', expected one (hartree) to compute its "
                      "enthalpy of formation with method '{}'",
                      s.name, method.label));
+  if (const int charge = s.charge; charge != 0)
+    fail(s.origin,
+         fmt::format("species '{}' has charge {:+d}: the atomization route here is for neutral species, "
+                     "expected 'enthalpy_of_formation' or a reaction (--formation-reactions) for an ion",
+                     s.name, charge));
   double atoms = 0.0;
   for (const auto& [symbol, count] : s.formula) {
     const auto it = method.elements.find(symbol);

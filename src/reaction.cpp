@@ -57,6 +57,13 @@ void check_reaction_balance(const Reaction& reaction) {
       scale = std::max(scale, std::abs(t.coefficient * count));
     }
   }
+  double charge = 0.0;
+  for (const auto& t : reaction.terms) charge += t.coefficient * t.prepared.species.charge;
+  if (std::abs(charge) > 1e-9 * std::max(1.0, scale))
+    fail(reaction.origin,
+         fmt::format("reaction '{}' does not balance in charge: products minus reactants {:+g} e, "
+                     "expected equal charge on both sides",
+                     reaction.name, charge));
   std::string off;
   for (const auto& [element, n] : surplus)
     if (std::abs(n) > 1e-9 * std::max(1.0, scale))

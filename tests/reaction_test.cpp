@@ -8,6 +8,8 @@
 
 #include "test_species.hpp"
 #include "vibtherm/constants.hpp"
+#include "vibtherm/formation.hpp"
+#include "vibtherm/read_method.hpp"
 
 using namespace vibtherm;
 
@@ -99,6 +101,23 @@ TEST_CASE("unbalanced reactions and missing enthalpies are named") {
                        doctest::Contains("species 'H2O' (reaction 'w') has neither"), InputError);
   CHECK_THROWS_WITH_AS(solve_unknown_formation(water_dissociation(), 0),
                        doctest::Contains("species 'H2O' has no 'electronic_energy'"), InputError);
+}
+
+TEST_CASE("charge balance") {
+  // H2O = H2 + ½O2 with one side charged: the elements balance, the charge does not.
+  Reaction r = water_dissociation();
+  r.terms[1].prepared.species.charge = 1;
+  CHECK_THROWS_WITH_AS(reaction_table(r, {300.0}),
+                       doctest::Contains("does not balance in charge: products minus reactants +1 e"),
+                       InputError);
+  // The atomization route is for neutral species.
+  PreparedSpecies ion = prepare_species(test::water());
+  ion.species.charge = 1;
+  ion.species.electronic_energy_J_per_mol = -76.0;
+  CHECK_THROWS_WITH_AS(
+      atomization_formation_enthalpy(
+          ion, read_method_yaml("label: m\nelements: {H: {energy: 0}, O: {energy: 0}}\n", "m")),
+      doctest::Contains("has charge +1"), InputError);
 }
 
 TEST_CASE("electronic basis and the unknown ΔfH° (hand computation)") {

@@ -103,3 +103,17 @@ TEST_CASE("Molden: errors are located") {
   CHECK(molden_error("[Molden Format]\n" + h2_coord + "[FREQ]\n4401\n[INT]\n1\n2\n") ==
         "in.molden:7:1: error: [INT] has 2 lines, expected 1 (one per [FREQ] wavenumber)");
 }
+
+TEST_CASE("from: a Molden file with the YAML's symmetry number and enthalpy equals the YAML") {
+  // tests/data/water-from-molden.yaml adds σ = 2 and ΔfH° of water.yaml to the model's modes.
+  const Species s = read_species_file(data_dir + "/water-from-molden.yaml");
+  CHECK(s.name == "water-model-all-modes");
+  CHECK(s.symmetry_number == 2);
+  REQUIRE(s.enthalpy_of_formation_J_per_mol.has_value());
+  CHECK(*s.enthalpy_of_formation_J_per_mol == doctest::Approx(-241826.0));
+  const PreparedSpecies a = prepare_species(s);
+  const PreparedSpecies b = prepare_species(read_species_file(data_dir + "/water-model-hessian-full.yaml"));
+  for (double T : {200.0, 1000.0})
+    CHECK(evaluate(a, T).S_J_per_mol_K == doctest::Approx(evaluate(b, T).S_J_per_mol_K).epsilon(1e-9));
+  CHECK(a.notes.front().rfind("Molden file: dropped 6", 0) == 0);
+}

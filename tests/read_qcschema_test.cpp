@@ -154,3 +154,50 @@ TEST_CASE("QCSchema: errors are located") {
   CHECK(qc_error(result("hessian", ", \"success\": false")) ==
         "in.json:3:34: error: 'success' is false: the job failed, expected the result of a finished job");
 }
+
+// `from:` in a YAML file: the QCSchema result's geometry and Hessian with deuterium put on
+// top (tests/data/heavy-water-from-qcschema.yaml) equal the YAML Hessian with the same
+// isotopes, so the D2O wavenumbers of the model agree to 1e-6 cm^-1.
+TEST_CASE("from: a QCSchema result with isotopes on top gives the D2O of the YAML Hessian") {
+  std::ifstream in(data_dir + "/water-model-hessian-full.yaml");
+  const std::string text((std::istreambuf_iterator<char>(in)), std::istreambuf_iterator<char>());
+  const PreparedSpecies yaml = prepare_species(
+      read_species_yaml(text + "isotopes: {2: D, 3: D}\n", data_dir + "/water-model-hessian-full.yaml"));
+  const Species s = read_species_file(data_dir + "/heavy-water-from-qcschema.yaml");
+  CHECK(s.name == "heavy-water-model");
+  CHECK(s.symmetry_number == 2);
+  CHECK(s.atoms[1].isotope == "D");
+  REQUIRE(s.electronic_energy_J_per_mol.has_value());
+  const PreparedSpecies qc = prepare_species(s);
+  REQUIRE(qc.vibrations_cm1.size() == 3);
+  for (std::size_t i = 0; i < 3; ++i) CHECK(std::abs(qc.vibrations_cm1[i] - yaml.vibrations_cm1[i]) < 1e-6);
+  for (double T : {298.15, 1000.0}) {
+    CHECK(evaluate(qc, T).S_J_per_mol_K == doctest::Approx(evaluate(yaml, T).S_J_per_mol_K).epsilon(1e-9));
+    CHECK(evaluate(qc, T).Cp_J_per_mol_K == doctest::Approx(evaluate(yaml, T).Cp_J_per_mol_K).epsilon(1e-9));
+  }
+}
+
+TEST_CASE("from: what the YAML may not redefine, and a file without vibrations") {
+  const std::string dir = data_dir + "/x.yaml";
+  try {
+    read_species_yaml("from: water-model-hessian.json\natoms: [[H, 0, 0, 0]]\n", dir);
+    FAIL("no error");
+  } catch (const InputError& e) {
+    CHECK(std::string(e.what()) ==
+          dir +
+              ":2:1: error: key 'atoms' cannot be combined with 'from' (the file gives the "
+              "geometry and force field), expected 'frequencies' or 'isotopes' to change them");
+  }
+  CHECK_THROWS_WITH_AS(
+      read_species_yaml("from: missing.json\n", dir),
+      (dir + ":1:7: error: 'from' file 'missing.json' does not exist (paths are relative to this "
+             "file)")
+          .c_str(),
+      InputError);
+  // Frequencies given here replace the file's Hessian.
+  const Species f =
+      read_species_yaml("from: water-model-hessian.json\nfrequencies: [1595, 3657, 3756]\n", dir);
+  CHECK_FALSE(f.hessian_J_per_m2.has_value());
+  CHECK(f.frequencies_cm1 == std::vector<double>{1595.0, 3657.0, 3756.0});
+  CHECK(f.name == "water-model-hessian");
+}
