@@ -235,7 +235,7 @@ double YamlValues::energy_J_per_mol(const YAML::Node& node, const std::string& w
                                     const std::string& bare_unit) const {
   double v = 0.0;
   std::string u = bare_unit;
-  const YAML::Node* at_node = &node;
+  YAML::Node at_node = node;  // a handle of its own: the entries below go out of scope
   if (node.IsMap()) {
     Entries e = entries(node, what, {"value", "unit"});
     const YAML::Node* value = find(e, "value");
@@ -244,14 +244,14 @@ double YamlValues::energy_J_per_mol(const YAML::Node& node, const std::string& w
     v = number(*value, what);
     if (unit) {
       u = text(*unit, "'unit'");
-      at_node = unit;
+      at_node = *unit;
     }
   } else {
     v = number(node, what);  // bare number: kJ/mol for enthalpies (design.md section 4)
   }
   std::optional<double> J_per_mol = to_energy_J_per_mol(v, u);
   if (!J_per_mol)
-    error(*at_node, "unknown energy unit " + quote(u) + ", expected one of " + energy_units_list());
+    error(at_node, "unknown energy unit " + quote(u) + ", expected one of " + energy_units_list());
   return *J_per_mol;
 }
 
