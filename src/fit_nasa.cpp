@@ -301,10 +301,12 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitPlan& plan) {
   // The key is missing, so the error names the file, not a line of it.
   if (!sp.enthalpy_of_formation_J_per_mol && !options.allow_missing_hf)
     fail({sp.origin.file, 0, 0},
-         fmt::format("species '{}' has no enthalpy of formation, which a NASA polynomial needs "
-                     "(H(298.15 K) = ΔfH°): add `enthalpy_of_formation: VALUE` (kJ/mol, or {{value, unit}}) "
-                     "to the species file, or pass --allow-missing-hf to write H(298.15 K) = 0",
-                     sp.name));
+         fmt::format(
+             "species '{}' has no enthalpy of formation, which a NASA polynomial needs "
+             "(H(298.15 K) = ΔfH°): add `enthalpy_of_formation: VALUE` (kJ/mol, or {{value, unit}}) "
+             "to the species file, give 'electronic_energy' with a method file (--method) or reactions "
+             "(--formation-reactions) to compute it, or pass --allow-missing-hf to write H(298.15 K) = 0",
+             sp.name));
   out.enthalpy_of_formation_missing = !sp.enthalpy_of_formation_J_per_mol.has_value();
   out.enthalpy_of_formation_J_per_mol = sp.enthalpy_of_formation_J_per_mol.value_or(0.0);
   if (out.enthalpy_of_formation_missing)

@@ -92,4 +92,22 @@ PreparedSpecies prepare_with_method(const Species& species, const ModelOptions& 
   return p;
 }
 
+void apply_reaction_formation(PreparedSpecies& p, double dfH298_J_per_mol, const std::string& route) {
+  auto& h = p.species.enthalpy_of_formation_J_per_mol;
+  if (h && p.enthalpy_of_formation_route.empty()) {
+    p.notes.push_back(fmt::format("enthalpy of formation {:.2f} kJ/mol as given; {} gives {:.2f} kJ/mol",
+                                  *h / 1e3, route, dfH298_J_per_mol / 1e3));
+    return;
+  }
+  if (h)
+    p.notes.push_back(
+        fmt::format("enthalpy of formation from {} ({:.2f} kJ/mol) replaces the {} value {:.2f} kJ/mol",
+                    route, dfH298_J_per_mol / 1e3, p.enthalpy_of_formation_route, *h / 1e3));
+  else
+    p.notes.push_back(
+        fmt::format("enthalpy of formation {:.2f} kJ/mol from {}", dfH298_J_per_mol / 1e3, route));
+  h = dfH298_J_per_mol;
+  p.enthalpy_of_formation_route = route;
+}
+
 }  // namespace vibtherm

@@ -119,8 +119,10 @@ ReactionTable reaction_table(const Reaction& reaction, const std::vector<double>
     row.delta_G_J_per_mol = row.delta_H_J_per_mol - T * row.delta_S_J_per_mol_K;
     const double ln_K_state = -row.delta_G_J_per_mol / (R * T);
     const double ln_Kp = ln_K_state + table.delta_n * std::log(p_state / p_ref);
-    row.Kp = std::exp(ln_Kp);
-    row.Kc = std::exp(ln_Kp + table.delta_n * std::log(p_ref / (R * T * standard_concentration_mol_per_m3)));
+    row.ln_Kp = ln_Kp;
+    row.ln_Kc = ln_Kp + table.delta_n * std::log(p_ref / (R * T * standard_concentration_mol_per_m3));
+    row.Kp = std::exp(row.ln_Kp);
+    row.Kc = std::exp(row.ln_Kc);
     table.Kp_reference_Pa = p_ref;
     table.rows.push_back(row);
   }
@@ -142,7 +144,7 @@ LnKFit fit_ln_K(const std::vector<ReactionRow>& rows, bool concentration) {
     X(k, 0) = 1.0;
     X(k, 1) = std::log(T);
     X(k, 2) = -1.0 / (R * T) * 1e3;  // E in kJ/mol keeps the columns of similar size
-    y(k) = std::log(concentration ? rows[i].Kc : rows[i].Kp);
+    y(k) = concentration ? rows[i].ln_Kc : rows[i].ln_Kp;
   }
   const Eigen::Vector3d c = X.colPivHouseholderQr().solve(y);
   LnKFit fit;

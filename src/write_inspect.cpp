@@ -94,9 +94,14 @@ std::string inspect_csv(const std::vector<SpeciesFacts>& all) {
       "number,"
       "atoms,modes_given,modes_expected,imaginary,zpe_kJ_per_mol\n";
   for (const auto& f : all) {
-    out += fmt::format("{},{},{},{},{:.6f},{:.4f},{:.6f},{:.6f},{:.6f},{},{},{},{},{},{:.6f}\n",
-                       csv_field(f.name), csv_field(f.formula), f.phase, rotor_type_name(f.rotor), f.mass_amu,
-                       f.molar_mass_g_per_mol, f.moments_amu_A2[0], f.moments_amu_A2[1], f.moments_amu_A2[2],
+    // An adsorbate has no rotor: its rotor and moment fields are empty.
+    const bool rotates = f.phase != "adsorbate";
+    const std::string rotor = rotates ? std::string(rotor_type_name(f.rotor)) : std::string();
+    const std::string moments = rotates ? fmt::format("{:.6f},{:.6f},{:.6f}", f.moments_amu_A2[0],
+                                                      f.moments_amu_A2[1], f.moments_amu_A2[2])
+                                        : std::string(",,");
+    out += fmt::format("{},{},{},{},{:.6f},{:.4f},{},{},{},{},{},{},{:.6f}\n", csv_field(f.name),
+                       csv_field(f.formula), f.phase, rotor, f.mass_amu, f.molar_mass_g_per_mol, moments,
                        f.symmetry_number, f.atom_count, f.given_modes, f.expected_modes, f.imaginary_modes,
                        f.zero_point_energy_J_per_mol / 1e3);
   }
@@ -108,10 +113,12 @@ std::string inspect_json(const std::vector<SpeciesFacts>& all) {
   doc["species"] = nlohmann::ordered_json::array();
   for (const auto& f : all) {
     nlohmann::ordered_json s;
+    // An adsorbate neither translates nor rotates: no rotor type, moments or constants.
+    const bool rotates = f.phase != "adsorbate";
     s["name"] = f.name;
-    s["rotor"] = rotor_type_name(f.rotor);
+    if (rotates) s["rotor"] = rotor_type_name(f.rotor);
     s["mass"] = f.mass_amu;
-    s["moments_of_inertia"] = f.moments_amu_A2;
+    if (rotates) s["moments_of_inertia"] = f.moments_amu_A2;
     s["symmetry_number"] = f.symmetry_number;
     s["frequencies"] = f.frequencies_cm1;
     s["zpe"] = f.zero_point_energy_J_per_mol / 1e3;
@@ -122,9 +129,11 @@ std::string inspect_json(const std::vector<SpeciesFacts>& all) {
     s["formula"] = f.formula;
     s["phase"] = f.phase;
     s["molar_mass"] = f.molar_mass_g_per_mol;
-    s["rotational_constants_cm1"] = f.rotational_constants_cm1;
-    s["rotational_constants_GHz"] = f.rotational_constants_GHz;
-    s["rotational_temperatures_K"] = f.rotational_temperatures_K;
+    if (rotates) {
+      s["rotational_constants_cm1"] = f.rotational_constants_cm1;
+      s["rotational_constants_GHz"] = f.rotational_constants_GHz;
+      s["rotational_temperatures_K"] = f.rotational_temperatures_K;
+    }
     s["ground_degeneracy"] = f.ground_degeneracy;
     s["mode_counts"] = {{"given", f.given_modes},
                         {"expected", f.expected_modes},

@@ -76,3 +76,19 @@ TEST_CASE("atomization errors name the species or the element") {
   CHECK_THROWS_WITH_AS(formation_from_atomization_energy({{"Xe", 1}}, 0.0, 0.0, {}),
                        doctest::Contains("no atomic enthalpy of formation for Xe"), InputError);
 }
+
+TEST_CASE("a reaction-route value: a given value wins, an atomization value is replaced") {
+  PreparedSpecies p = prepare_species(test::water());  // ΔfH° given (CODATA)
+  apply_reaction_formation(p, -240e3, "reaction set r");
+  CHECK(*p.species.enthalpy_of_formation_J_per_mol == -241.826e3);
+  CHECK(p.enthalpy_of_formation_route.empty());
+  CHECK(p.notes.back().find("as given; reaction set r gives -240.00 kJ/mol") != std::string::npos);
+  p.species.enthalpy_of_formation_J_per_mol.reset();
+  apply_reaction_formation(p, -240e3, "reaction set r");
+  CHECK(*p.species.enthalpy_of_formation_J_per_mol == -240e3);
+  CHECK(p.enthalpy_of_formation_route == "reaction set r");
+  p.enthalpy_of_formation_route = "atomization with method 'm'";
+  apply_reaction_formation(p, -239e3, "reaction set s");
+  CHECK(*p.species.enthalpy_of_formation_J_per_mol == -239e3);
+  CHECK(p.notes.back().find("replaces the atomization with method 'm' value -240.00") != std::string::npos);
+}

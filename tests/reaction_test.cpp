@@ -127,6 +127,8 @@ TEST_CASE("ln K fit recovers A, n and E of an exact modified-Arrhenius form") {
     row.T_K = T;
     row.Kp = 3.5 * std::pow(T, 1.7) * std::exp(-45e3 / (R * T));
     row.Kc = 2.0 * row.Kp;
+    row.ln_Kp = std::log(row.Kp);
+    row.ln_Kc = std::log(row.Kc);
     rows.push_back(row);
   }
   const LnKFit f = fit_ln_K(rows, false);

@@ -5,7 +5,8 @@ on synthetic mechanisms from gen_mechanism.py, with the machine load beside each
 Prints: fit of 10,000 YAML species with -j 2 (target <= 2.0 s, <= 100 MB), of 10,000 XYZ
 species (<= 1.0 s), table of 10,000 species at 100 temperatures (<= 100 MB), linearity
 1,000 vs 10,000, and the per-species speed of `table` against python3-ase's
-IdealGasThermo computing S and H at the same 100 temperatures (target >= 150x).
+IdealGasThermo computing S and H at the same 100 temperatures (target >= 150x), and the
+wall time and size of a report of 1,000 species (target under 5 s).
 
 Usage: bench_scale.py VIBTHERM_EXE [COUNT=10000] [JOBS=2]
 """
@@ -98,3 +99,14 @@ with tempfile.TemporaryDirectory() as tmp:
     ours = rows[3][1] / count
     print(f"table per species at 100 T: vibtherm {ours * 1e6:.1f} us (whole run: read, prepare, format), "
           f"python3-ase IdealGasThermo {ase * 1e6:.0f} us (S and H only, 200 species): ratio {ase / ours:.0f}x")
+
+    # The report of a mechanism: 1,000 species (a fifth with a hindered rotor), one page.
+    report_count = min(count, 1000)
+    subprocess.run(gen + [f"{tmp}/report", str(report_count)], check=True)
+    page = f"{tmp}/report.html"
+    before = load()
+    start = time.perf_counter()
+    subprocess.run([exe, "report", f"{tmp}/report", "-q", "-j", jobs, "-o", page], check=True)
+    wall = time.perf_counter() - start
+    print(f"report of {report_count} YAML species: {wall:.3f} s, {os.path.getsize(page) / 1e6:.1f} MB page "
+          f"({before} before, {load()} after)")

@@ -42,4 +42,9 @@ FormationEnthalpy atomization_formation_enthalpy(const PreparedSpecies& prepared
 PreparedSpecies prepare_with_method(const Species& species, const ModelOptions& options,
                                     const Method* method);
 
+// Applies a ΔfH°(298.15 K) from the reaction route (`route` e.g. "reaction set r1, r2 (mean
+// of 2 ...)"): a given `enthalpy_of_formation` wins (the reaction value is noted beside it);
+// otherwise it replaces an atomization value (noted) or fills the missing one.
+void apply_reaction_formation(PreparedSpecies& prepared, double dfH298_J_per_mol, const std::string& route);
+
 }  // namespace vibtherm

@@ -44,8 +44,9 @@ struct ReactionRow {
   double delta_H_J_per_mol = 0.0;
   double delta_S_J_per_mol_K = 0.0;
   double delta_G_J_per_mol = 0.0;
-  double Kp = 0.0;  // relative to p° = 1 bar (or 1 atm for that standard state)
-  double Kc = 0.0;  // relative to c° = 1 mol/L
+  double Kp = 0.0;                  // relative to p° = 1 bar (or 1 atm for that standard state)
+  double Kc = 0.0;                  // relative to c° = 1 mol/L
+  double ln_Kp = 0.0, ln_Kc = 0.0;  // finite where Kp or Kc over- or underflow
 };
 
 struct ReactionTable {

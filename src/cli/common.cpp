@@ -66,6 +66,11 @@ void add_common_options(CLI::App& sub, CommonOptions& o, bool with_temps,
                  "treat imaginary wavenumbers smaller than this (cm^-1) as real, with a warning");
   sub.add_flag("--allow-mode-count-mismatch", o.mode_count_warning,
                "warn instead of failing when the number of frequencies is not 3N-6 / 3N-5");
+  sub.add_option(
+         "--formation-reactions", o.formation_reactions,
+         "reaction files (comma-separated or repeated), each with an 'unknown': that species' enthalpy of "
+         "formation is the mean of its reactions")
+      ->delimiter(',');
   sub.add_option("--method", o.method_file,
                  "method file (atomic energies, bond corrections, scale factors) for species with an "
                  "electronic_energy and no 'method' key of their own: gives their enthalpy of formation");
@@ -128,16 +133,74 @@ void emit_log(const std::vector<LogLine>& log) {
   for (const auto& line : log) spdlog::log(line.level, "{}", line.text);
 }
 
+PreparedSpecies read_and_prepare(const std::string& path, const ModelOptions& model,
+                                 const std::string& method_file, std::string* bytes) {
+  const Species species = read_species_file(path, bytes);
+  const std::string& method_path = species.method_file.empty() ? method_file : species.method_file;
+  std::optional<Method> method;
+  if (!method_path.empty()) method = read_method_file(method_path);
+  return prepare_with_method(species, model, method ? &*method : nullptr);
+}
+
+Reaction load_reaction(const ReactionFile& file, const ModelOptions& model, const std::string& method_file,
+                       const ReactionFormations* formations) {
+  Reaction r;
+  r.name = file.name;
+  r.origin = file.origin;
+  for (const auto& term : file.terms) {
+    PreparedSpecies p = read_and_prepare(term.path, model, method_file);
+    if (formations) {
+      std::error_code ec;
+      const auto it = formations->find(std::filesystem::weakly_canonical(term.path, ec).string());
+      if (it != formations->end()) apply_reaction_formation(p, it->second.dfH298_J_per_mol, it->second.route);
+    }
+    for (const auto& w : p.warnings) spdlog::warn("{}: {}", p.species.name, w);
+    r.terms.push_back({term.file, std::move(p), term.coefficient});
+  }
+  return r;
+}
+
+ReactionFormations formations_from_reactions(const CommonOptions& o, const ModelOptions& model) {
+  struct Collected {
+    std::vector<std::string> names;
+    std::vector<double> values;
+  };
+  std::map<std::string, Collected> by_path;
+  for (const std::string& path : o.formation_reactions) {
+    const ReactionFile file = read_reaction_file(path);
+    if (!file.unknown)
+      fail(file.origin,
+           fmt::format("reaction '{}' has no 'unknown', expected the species file whose enthalpy of "
+                       "formation it solves for (--formation-reactions)",
+                       file.name));
+    const Reaction reaction = load_reaction(file, model, o.method_file);
+    std::error_code ec;
+    Collected& c = by_path[std::filesystem::weakly_canonical(file.terms[*file.unknown].path, ec).string()];
+    c.names.push_back(file.name);
+    c.values.push_back(solve_unknown_formation(reaction, *file.unknown).dfH298_J_per_mol);
+  }
+  ReactionFormations out;
+  for (const auto& [path, c] : by_path) {
+    const Spread s = spread_of(c.values);
+    std::string names;
+    for (const auto& n : c.names) names += (names.empty() ? "" : ", ") + n;
+    out[path] = {s.mean, fmt::format("reaction set {} (mean of {}, standard deviation {:.2f} kJ/mol)", names,
+                                     c.values.size(), s.standard_deviation / 1e3)};
+  }
+  return out;
+}
+
 std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
                                       const RawProducer& work, std::vector<LogLine>& log,
-                                      const std::string& method_file) {
+                                      const std::string& method_file, const ReactionFormations* formations) {
   try {
     std::string bytes;
-    const Species species = read_species_file(path, &bytes);
-    const std::string& method_path = species.method_file.empty() ? method_file : species.method_file;
-    std::optional<Method> method;
-    if (!method_path.empty()) method = read_method_file(method_path);
-    const PreparedSpecies p = prepare_with_method(species, model, method ? &*method : nullptr);
+    PreparedSpecies p = read_and_prepare(path, model, method_file, &bytes);
+    if (formations && !formations->empty()) {
+      std::error_code ec;
+      const auto it = formations->find(std::filesystem::weakly_canonical(path, ec).string());
+      if (it != formations->end()) apply_reaction_formation(p, it->second.dfH298_J_per_mol, it->second.route);
+    }
     for (const auto& w : p.warnings)
       log.push_back({spdlog::level::warn, fmt::format("{}: {}", p.species.name, w)});
     for (const auto& n : p.notes)

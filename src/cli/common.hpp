@@ -7,6 +7,7 @@
 #include <CLI/CLI.hpp>
 #include <functional>
 #include <iostream>
+#include <map>
 #include <memory>
 #include <optional>
 #include <string>
@@ -14,6 +15,8 @@
 
 #include "vibtherm/error.hpp"
 #include "vibtherm/ordered_map.hpp"
+#include "vibtherm/reaction.hpp"
+#include "vibtherm/read_reaction.hpp"
 #include "vibtherm/thermo.hpp"
 
 namespace vibtherm::cli {
@@ -45,9 +48,18 @@ struct CommonOptions {
   bool transition_state = false;
   double imaginary_as_real_below_cm1 = 0.0;
   bool mode_count_warning = false;
-  unsigned jobs = 0;        // 0: every core
-  std::string method_file;  // --method: for species without their own `method` key
+  unsigned jobs = 0;                             // 0: every core
+  std::string method_file;                       // --method: for species without their own `method` key
+  std::vector<std::string> formation_reactions;  // --formation-reactions: reaction files with `unknown`
 };
+
+// ΔfH°(298.15 K) of species solved for by reaction files (--formation-reactions), keyed by
+// the species file's canonical path: the mean over the reactions, and the route text.
+struct ReactionFormation {
+  double dfH298_J_per_mol = 0.0;
+  std::string route;
+};
+using ReactionFormations = std::map<std::string, ReactionFormation>;
 
 // Adds -j/--jobs (species processed at once; default every core) to a subcommand.
 void add_jobs_option(CLI::App& sub, unsigned& jobs);
@@ -123,10 +135,24 @@ struct BatchSummary {
 // Outcome<Piece> for one species: read, prepare, then `work` (on a worker thread). An
 // InputError without a file gets the species' file.
 using RawProducer = std::function<void(const SpeciesInput&, std::vector<LogLine>&)>;
+// Reads a species file and prepares it, under its own `method` file or else `method_file`
+// (--method, may be empty); `bytes` receives the file's content when given.
+PreparedSpecies read_and_prepare(const std::string& path, const ModelOptions& model,
+                                 const std::string& method_file, std::string* bytes = nullptr);
+
+// The species files of a reaction file, read and prepared (their warnings logged once each).
+// `formations` (--formation-reactions, may be null) gives the species its reaction-set ΔfH°.
+Reaction load_reaction(const ReactionFile& file, const ModelOptions& model, const std::string& method_file,
+                       const ReactionFormations* formations = nullptr);
+
+// Solves every reaction of options.formation_reactions (each needs `unknown`).
+ReactionFormations formations_from_reactions(const CommonOptions& options, const ModelOptions& model);
+
 // `method_file` (--method) applies to species without a `method` key of their own.
 std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
                                       const RawProducer& work, std::vector<LogLine>& log,
-                                      const std::string& method_file = "");
+                                      const std::string& method_file = "",
+                                      const ReactionFormations* formations = nullptr);
 void emit_log(const std::vector<LogLine>& log);
 
 // Expands the paths, then reads, prepares and runs `work` on every species on o.jobs
@@ -138,6 +164,7 @@ BatchSummary for_each_species(const CommonOptions& o, const std::vector<std::str
                               const std::function<Piece(const SpeciesInput&, std::vector<LogLine>&)>& work,
                               const std::function<void(Piece&)>& consume) {
   const ModelOptions model = model_options(o);
+  const ReactionFormations formations = formations_from_reactions(o, model);
   BatchSummary summary;
   ordered_map<Outcome<Piece>>(
       paths.size(), thread_count(o.jobs),
@@ -146,7 +173,7 @@ BatchSummary for_each_species(const CommonOptions& o, const std::vector<std::str
         out.error = run_species(
             paths[i], model,
             [&](const SpeciesInput& in, std::vector<LogLine>& log) { out.piece = work(in, log); }, out.log,
-            o.method_file);
+            o.method_file, &formations);
         return out;
       },
       [&](std::size_t, Outcome<Piece>& out) {
@@ -178,5 +205,6 @@ void setup_fit(CLI::App& sub);
 void setup_eval(CLI::App& sub);
 void setup_modes(CLI::App& sub);
 void setup_report(CLI::App& sub);
+void setup_reaction(CLI::App& sub);
 
 }  // namespace vibtherm::cli

@@ -43,6 +43,10 @@ constexpr SubcommandEntry subcommands[] = {
      "self-contained HTML page for one or many species: index, Cp/S/H computed and fitted, modes, NASA-7",
      "Default table temperatures: 298.15, 500, 1000, 1500, 2000, 3000 K; pictures span the fit range.",
      vibtherm::cli::setup_report},
+    {"reaction",
+     "reaction files: dH, dS, dG, Kp, Kc versus temperature; solves a reaction for one unknown enthalpy of "
+     "formation",
+     "Default temperatures: 298.15 K, then 300 to 3000 K every 100 K.", vibtherm::cli::setup_reaction},
 };
 
 }  // namespace

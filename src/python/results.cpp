@@ -131,12 +131,19 @@ py::dict facts_dict(const PreparedSpecies& prepared) {
   py::dict d;
   d["name"] = f.name;
   d["formula"] = f.formula;
-  d["rotor"] = rotor_type_name(f.rotor);
   d["mass"] = f.mass_amu;
   d["molar_mass"] = f.molar_mass_g_per_mol;
-  d["moments_of_inertia"] = array({f.moments_amu_A2.begin(), f.moments_amu_A2.end()});
-  d["rotational_constants"] = array(f.rotational_constants_cm1);
-  d["rotational_temperatures"] = array(f.rotational_temperatures_K);
+  // An adsorbate neither translates nor rotates: its rotor facts are None, as the
+  // command line's JSON leaves them out.
+  if (f.phase == "adsorbate") {
+    for (const char* key : {"rotor", "moments_of_inertia", "rotational_constants", "rotational_temperatures"})
+      d[key] = py::none();
+  } else {
+    d["rotor"] = rotor_type_name(f.rotor);
+    d["moments_of_inertia"] = array({f.moments_amu_A2.begin(), f.moments_amu_A2.end()});
+    d["rotational_constants"] = array(f.rotational_constants_cm1);
+    d["rotational_temperatures"] = array(f.rotational_temperatures_K);
+  }
   d["symmetry_number"] = f.symmetry_number;
   d["atoms"] = f.atom_count;
   d["expected_modes"] = f.expected_modes;

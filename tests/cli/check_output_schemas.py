@@ -20,13 +20,21 @@ cases = [
     ("modes.schema.json", ["modes", examples, "--format", "json"]),
     ("fit.schema.json", ["fit", examples, "--form", "json"]),
 ]
-# The model extensions: a qrrho species, a transition state with tunnelling, an ensemble.
+# The model extensions: a qrrho species, a transition state with tunnelling, an ensemble,
+# an adsorbate (no rotor facts).
 data = os.path.join(root, "tests", "data")
-extensions = [os.path.join(data, f) for f in ("model-soft-mode.yaml", "model-ts-symmetric.yaml", "model-conformers.yaml")]
+extensions = [os.path.join(data, f) for f in ("model-soft-mode.yaml", "model-ts-symmetric.yaml", "model-conformers.yaml",
+                                                     "adsorbed-water.yaml")]
 cases += [
     ("table.schema.json", ["table", *extensions, "--format", "json", "--breakdown", "--temps", "300,1000"]),
     ("inspect.schema.json", ["inspect", *extensions, "--format", "json"]),
     ("modes.schema.json", ["modes", *extensions, "--format", "json"]),
+]
+# Reactions: the JANAF checks, with the ln K fit.
+reactions = os.path.join(root, "validation", "reactions")
+cases += [
+    ("reaction.schema.json", ["reaction", os.path.join(reactions, "water-dissociation.yaml"),
+                              os.path.join(reactions, "dinitrogen-tetroxide.yaml"), "--format", "json", "--fit-lnk"]),
 ]
 passed = failed = 0
 for schema_name, args in cases:

@@ -73,4 +73,25 @@ with tempfile.TemporaryDirectory() as tmp:
     check("a missing method file is one located error", r.returncode == 2 and "nowhere.yaml: error: cannot read file"
           in r.stderr, r.stderr)
 
+# The reaction route feeds fit: three reactions for ethane (validation/formation; energies
+# from experimental D0, see the files) give the mean as the NASA H298, the route in the notes.
+vf = os.path.join(root, "validation", "formation")
+sets = ",".join(os.path.join(vf, f"ethane-{n}.yaml") for n in ("hydrogenolysis", "combustion", "steam-reforming"))
+with tempfile.TemporaryDirectory() as tmp:
+    out = os.path.join(tmp, "e.json")
+    r = run("fit", os.path.join(vf, "ethane.yaml"), "--formation-reactions", sets, "--form", "json", "-o", out)
+    sp = json.load(open(out))["species"][0] if r.returncode == 0 else {}
+    # Mean of the three reactions, printed by validation_reactions: -85.22 kJ/mol.
+    check("fit uses the mean of the reaction set", abs(sp.get("enthalpy_of_formation_J_per_mol", 0) / 1e3 + 85.221)
+          < 0.01, r.stderr)
+    check("fit notes the reaction set", any("reaction set ethane-hydrogenolysis, ethane-combustion" in n
+                                            for n in sp.get("notes", [])), json.dumps(sp.get("notes")))
+    r = run("inspect", os.path.join(vf, "methane.yaml"), "--formation-reactions", sets, "--format", "json")
+    s = json.loads(r.stdout)["species"][0] if r.returncode == 0 else {}
+    check("a species that is not the unknown keeps its own value", s.get("enthalpy_of_formation") == -74.87
+          and s.get("enthalpy_of_formation_route") == "given", r.stderr)
+    r = run("inspect", os.path.join(vf, "ethane.yaml"), "--formation-reactions",
+            os.path.join(root, "tests", "data", "water-reaction.yaml"))
+    check("a reaction without 'unknown' is refused", r.returncode == 2 and "has no 'unknown'" in r.stderr, r.stderr)
+
 checks.finish()

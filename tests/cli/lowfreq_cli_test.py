@@ -114,6 +114,54 @@ for T in (300.0, 600.0, 1500.0):
     ref = eckart_symmetric_kappa(40e3, 1500.0, T)
     c.check(f"kappa_eckart at {T:g} K matches the independent quadrature ({ref:.8f}) to 1e-7",
             abs(x.get("kappa_eckart", 0) - ref) < 1e-7 * ref, (x.get("kappa_eckart"), ref))
+
+
+def eckart_kappa_jh(V1_J_per_mol, V2_J_per_mol, nu_cm1, T):
+    """Unsymmetrical Eckart barrier in the parametrisation of Johnston & Heicklen, J. Phys.
+    Chem. 66, 532 (1962): α_i = 2πV_i/(hν), ξ = E/V1 (E above the reactants), a and b
+    from the kinetic energies far on the reactant side (E) and the product side
+    (E − V1 + V2): 2πa = 2√(α1 ξ)/(α1^-1/2 + α2^-1/2), 2πb = 2√((ξ − 1)α1 + α2)/(α1^-1/2 + α2^-1/2),
+    2πd = 2√(α1 α2 − π²/4), P = (cosh 2π(a+b) − cosh 2π(a−b)) / (cosh 2π(a+b) + cosh 2πd),
+    κ = e^{V1/kT} ∫ P(E) e^{−E/kT} dE/kT from E0 = max(0, V1 − V2); composite Simpson in
+    u = √(E − E0). A different parametrisation from the library's (Eckart's A, B, C); the
+    formulas are from memory, checked by their symmetric limit below."""
+    V1, V2 = V1_J_per_mol / NA, V2_J_per_mol / NA
+    hnu = h * cl * 100.0 * nu_cm1
+    a1, a2 = 2 * math.pi * V1 / hnu, 2 * math.pi * V2 / hnu
+    denominator = 1 / math.sqrt(a1) + 1 / math.sqrt(a2)
+    D = 2 * math.sqrt(a1 * a2 - math.pi ** 2 / 4)
+    kT = k * T
+    E0 = max(0.0, V1 - V2)
+
+    def P(E):
+        xi = E / V1
+        X = 2 * (math.sqrt(a1 * xi) + math.sqrt(max(0.0, (xi - 1) * a1 + a2))) / denominator  # 2π(a+b)
+        Y = 2 * (math.sqrt(a1 * xi) - math.sqrt(max(0.0, (xi - 1) * a1 + a2))) / denominator  # 2π(a−b)
+        M = max(X, abs(Y), D)  # scale every cosh by e^{-M}
+        ch = lambda z: 0.5 * (math.exp(z - M) + math.exp(-z - M))
+        return (ch(X) - ch(Y)) / (ch(X) + ch(D))
+
+    top = math.sqrt(V1 + 60 * kT - E0)
+    n = 200000
+    step = top / n
+    f = lambda u: 2 * u * P(E0 + u * u) * math.exp((V1 - E0 - u * u) / kT) / kT
+    s = f(0.0) + f(top)
+    for i in range(1, n):
+        s += (4 if i % 2 else 2) * f(i * step)
+    return s * step / 3
+
+
+unsym = os.path.join(data, "model-ts-unsymmetrical.yaml")
+doc, r = json_of("table", unsym, "--temps", "300,600,1500")
+c.check("unsymmetrical transition-state table exits 0", doc is not None, r.stderr)
+for T in (300.0, 600.0, 1500.0):
+    x = row(doc, T) if doc else {}
+    ref = eckart_kappa_jh(40e3, 25e3, 1500.0, T)
+    c.check(f"unsymmetrical kappa_eckart at {T:g} K matches the Johnston-Heicklen quadrature ({ref:.8f}) to 1e-6",
+            abs(x.get("kappa_eckart", 0) - ref) < 1e-6 * ref, (x.get("kappa_eckart"), ref))
+# The same formulas reproduce the symmetric case (a = b): a check of the check.
+c.check("the Johnston-Heicklen quadrature equals the symmetric one at V1 = V2",
+        abs(eckart_kappa_jh(40e3, 40e3, 1500.0, 600.0) / eckart_symmetric_kappa(40e3, 1500.0, 600.0) - 1) < 1e-7)
 r = c.run("table", ts, "--temps", "300")
 c.check("text table has the kappa columns", "kappa.Wig" in r.stdout and "kappa.Eck" in r.stdout, r.stdout)
 ins, r = json_of("inspect", ts)

@@ -33,6 +33,20 @@ check("inspect json keys", all(k in spec for k in ("name", "rotor", "mass", "mom
 check("inspect rotor of water", spec.get("rotor") == "nonlinear")
 check("moments ascending", spec.get("moments_of_inertia", [1, 0]) == sorted(spec.get("moments_of_inertia", [1, 0])))
 
+# An adsorbate neither translates nor rotates: no rotor type, moments or rotational
+# constants in any format (issue 12).
+adsorbate = os.path.join(root, "tests", "data", "adsorbed-water.yaml")
+r = run("inspect", adsorbate, "--format", "json")
+spec = json.loads(r.stdout)["species"][0] if r.returncode == 0 else {}
+check("adsorbate json has no rotor facts", r.returncode == 0 and spec.get("phase") == "adsorbate" and
+      not any(k in spec for k in ("rotor", "moments_of_inertia", "rotational_constants_cm1")), r.stdout)
+r = run("inspect", adsorbate)
+check("adsorbate text has no rotor facts", r.returncode == 0 and "rotor" not in r.stdout and
+      "moments" not in r.stdout, r.stdout)
+r = run("inspect", adsorbate, "--format", "csv")
+fields = r.stdout.splitlines()[1].split(",") if r.returncode == 0 else []
+check("adsorbate csv leaves rotor and moments empty", fields[3:4] == [""] and fields[6:9] == ["", "", ""], r.stdout)
+
 # CSV has units in the header.
 r = run("table", water, "--temps", "300", "--format", "csv")
 check("csv header with units", r.returncode == 0 and "Cp_J_per_mol_K" in r.stdout.splitlines()[0])

@@ -77,6 +77,15 @@ def test_inspect_equals_cli(root, cli):
         assert facts["zpe"] == entry["zpe"]
 
 
+def test_adsorbate_has_no_rotor_facts(root, cli):
+    path = "tests/data/adsorbed-water.yaml"
+    entry = cli("inspect", path, "--format", "json")["species"][0]
+    facts = vibtherm.inspect(vibtherm.read(str(root / path))[0])
+    assert "rotor" not in entry and facts["rotor"] is None and facts["moments_of_inertia"] is None
+    assert facts["phase"] == entry["phase"] == "adsorbate"
+    assert facts["zpe"] == entry["zpe"]
+
+
 @pytest.mark.parametrize("form,range_", [("nasa7", None), ("nasa9", "200:1000:2000:6000")])
 def test_fit_equals_cli(root, cli, form, range_):
     path = f"{DEMO}/methanol.yaml"

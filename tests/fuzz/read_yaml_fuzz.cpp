@@ -1,0 +1,19 @@
+// libFuzzer entry point for the YAML species reader (read_yaml). A malformed input must
+// end in an InputError (the located one-line message); any other exception, a crash or a
+// sanitizer report is a bug.
+#include <cstddef>
+#include <cstdint>
+#include <string>
+
+#include "species_checks.hpp"
+#include "vibtherm/error.hpp"
+#include "vibtherm/read_yaml.hpp"
+
+extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
+  const std::string text(reinterpret_cast<const char*>(data), size);
+  try {
+    vibtherm::fuzz::check_species(vibtherm::read_species_yaml(text, "fuzz.yaml"));
+  } catch (const vibtherm::InputError&) {
+  }
+  return 0;
+}
