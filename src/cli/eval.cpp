@@ -37,11 +37,19 @@ NasaFile read_for_eval(const std::string& path, bool keep_going) {
   for (std::size_t k = 0; k < file.species.size(); ++k)
     for (const auto& w : nasa_sanity_warnings(file.species[k]))
       spdlog::warn("{}:{}: species '{}': {}", path, file.lines[k], polynomial_name(file.species[k]), w);
+  if (!file.errors.empty() && !keep_going) {
+    // One error line (design.md section 7): the first bad record, and how many more there are.
+    const InputError& first = file.errors.front();
+    if (file.errors.size() == 1) throw first;
+    throw InputError(first.where(), fmt::format("{} (and {} more bad record{}: --keep-going lists them and "
+                                                "tabulates the good ones)",
+                                                first.message(), file.errors.size() - 1,
+                                                file.errors.size() == 2 ? "" : "s"));
+  }
   for (const auto& e : file.errors) std::cerr << e.what() << '\n';
-  if (!file.errors.empty() && !keep_going) throw Exit{exit_input_error};
   if (file.species.empty()) {
-    spdlog::error("no species could be read: no output written");
-    throw Exit{exit_input_error};
+    spdlog::error("{}: no species could be read: no output written", path);
+    throw Exit{exit_some_failed};
   }
   return file;
 }

@@ -21,8 +21,9 @@ struct EvalOptions {
   unsigned jobs = 0;
 };
 
-// Reads `path`, printing its warnings, sanity findings and bad records; throws Exit(2)
-// when it has bad records and `keep_going` is false, or when no species could be read.
+// Reads `path`, printing its warnings and sanity findings. Bad records: without
+// `keep_going` an InputError (the first, with the count of the others: one error line);
+// with it each is printed, and Exit(1) when no species could be read.
 NasaFile read_for_eval(const std::string& path, bool keep_going);
 
 // The output of `eval FILE --against OTHER`: the chosen species of FILE compared with the
