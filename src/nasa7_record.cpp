@@ -211,6 +211,7 @@ Nasa7 read_nasa7_record(Cursor& cur, double default_T_mid_K) {
           cur.lines.back(), 0,
           fmt::format("species '{}': file ends inside its NASA-7 record (expected line {})", sp.name, k + 2));
     const auto v = coefficients(cur, cur.lines[cur.i], k == 2 ? 4 : 5, k == 2 ? 1 : 0, k + 2, sp.name);
+    check_coefficients(cur, cur.lines[cur.i], v, sp.name);
     c.insert(c.end(), v.begin(), v.end());
   }
   ++cur.i;

@@ -152,6 +152,7 @@ std::optional<Nasa9> read_nasa9_record(Cursor& cur) {
       if (b.size() == 5 && part == 1) b.erase(b.begin() + 2);  // the unused field written as a number
       for (const auto& n : b) v.push_back(n.value);
     }
+    check_coefficients(cur, tl, v, sp.name);
     std::copy(v.begin(), v.begin() + 7, range.a.begin());
     range.b1 = v[7];
     range.b2 = v[8];

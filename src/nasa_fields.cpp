@@ -1,4 +1,6 @@
 // Fixed-column field parsing for the NASA reader (see nasa_text.hpp).
+#include <fmt/format.h>
+
 #include <algorithm>
 #include <cctype>
 #include <charconv>
@@ -129,6 +131,15 @@ bool Cursor::next_content() {
 
 void Cursor::fail_at(const Line& line, int column, const std::string& message) const {
   fail({file, line.number, column}, message);
+}
+
+void check_coefficients(const Cursor& cur, const Line& line, const std::vector<double>& values,
+                        const std::string& name) {
+  for (double v : values)
+    if (!(std::abs(v) <= max_coefficient_magnitude))
+      cur.fail_at(line, 1,
+                  fmt::format("species '{}': coefficient {:g} is out of range (at most {:g} in magnitude)",
+                              name, v, max_coefficient_magnitude));
 }
 
 bool is_nasa9_second_record(const std::string& s) {

@@ -57,6 +57,12 @@ struct Cursor {
   [[noreturn]] void fail_at(const Line& line, int column, const std::string& message) const;
 };
 
+// Coefficients beyond ±1e30 (published ones stay below 1e10 in magnitude) would overflow
+// the evaluation; they are an error at `line`.
+inline constexpr double max_coefficient_magnitude = 1e30;
+void check_coefficients(const Cursor& cursor, const Line& line, const std::vector<double>& values,
+                        const std::string& name);
+
 // A NASA-7 record starting at cursor.i (line 1); leaves cursor.i after its line 4.
 // `default_T_mid_K` is the file's (THERMO line) or the conventional one.
 Nasa7 read_nasa7_record(Cursor& cursor, double default_T_mid_K);

@@ -130,7 +130,7 @@ class Reader {
     try {
       std::size_t j = start + 1;
       Cursor look{lines_, file_, j};
-      if (!look.next_content() || keyword_of(lines_[look.i].text) != Keyword::none)
+      if (!look.next_content())
         cur.fail_at(line, 1,
                     "species record '" + first_token(line.text) +
                         "' ends after its first line (expected its coefficient lines)");
@@ -169,7 +169,12 @@ class Reader {
       if (keyword_of(s) != Keyword::none) return;
       if (s.size() >= 80 && (s[79] == '2' || s[79] == '3' || s[79] == '4')) continue;
       if (starts_with_number(s)) continue;
-      return;
+      // A record's first line is followed by numbers (NASA-7 coefficients, the NASA-9
+      // interval count) or announces an '&' continuation.
+      const auto t = trim(strip_comment(s));
+      Cursor look{lines_, file_, cur.i + 1};
+      if ((!t.empty() && t.back() == '&') || (look.next_content() && starts_with_number(lines_[look.i].text)))
+        return;
     }
   }
 
