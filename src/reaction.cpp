@@ -18,6 +18,17 @@ constexpr double standard_concentration_mol_per_m3 = 1000.0;  // c° = 1 mol/L
 
 std::string number_text(double v) { return fmt::format("{:g}", v); }
 
+// The net charge of a species in e. The charge is read only where the species model has
+// the member (`if constexpr`), so this module builds against models with and without it;
+// without it every species is neutral.
+template <class S>
+double net_charge(const S& s) {
+  if constexpr (requires { s.charge; })
+    return static_cast<double>(s.charge);
+  else
+    return 0.0;
+}
+
 // The pressure of the species' standard state at T, and the pressure Kp refers to.
 std::pair<double, double> state_and_reference_Pa(const ModelOptions& o, double T_K) {
   if (o.standard_state == StandardState::molar)
@@ -57,6 +68,13 @@ void check_reaction_balance(const Reaction& reaction) {
       scale = std::max(scale, std::abs(t.coefficient * count));
     }
   }
+  double charge = 0.0;
+  for (const auto& t : reaction.terms) charge += t.coefficient * net_charge(t.prepared.species);
+  if (std::abs(charge) > 1e-9 * std::max(1.0, scale))
+    fail(reaction.origin,
+         fmt::format("reaction '{}' does not balance in charge: products minus reactants {:+g} e, "
+                     "expected equal charge on both sides",
+                     reaction.name, charge));
   std::string off;
   for (const auto& [element, n] : surplus)
     if (std::abs(n) > 1e-9 * std::max(1.0, scale))

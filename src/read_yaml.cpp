@@ -18,7 +18,7 @@
 #include "vibtherm/species_builder.hpp"
 #include "vibtherm/spelling.hpp"
 #include "vibtherm/units.hpp"
-#include "yaml_values.hpp"
+#include "yaml_species_parts.hpp"
 
 namespace vibtherm {
 namespace {
@@ -52,37 +52,37 @@ const std::vector<std::string> yaml_keys = {"name",
                                             "surface_site",
                                             "electronic_energy",
                                             "method",
-                                            "bonds"};
+                                            "bonds",
+                                            "from",
+                                            "charge"};
+
+// Keys that would redefine what a `from:` file gives (its geometry and force field).
+const std::vector<std::string> not_with_from = {"atoms",
+                                                "hessian",
+                                                "hessian_unit",
+                                                "mass",
+                                                "rotational_constants",
+                                                "moments_of_inertia",
+                                                "linear",
+                                                "formula",
+                                                "conformers",
+                                                "conformer_energies"};
 
 // Keys an ensemble file may hold besides `conformers`: the rest comes from the conformers.
 const std::vector<std::string> ensemble_keys = {
     "name", "conformers", "conformer_energies", "enthalpy_of_formation", "low_frequency", "scale"};
 
-// A full Hessian may differ from its transpose by this much, relative to its largest
-// element, and is then symmetrised: finite-difference Hessians and values printed to five
-// or six significant digits are slightly asymmetric, while a misordered or transposed
-// block is asymmetric at the size of the elements themselves.
-constexpr double hessian_symmetry_tolerance = 1e-4;
-
-class YamlReader : public YamlValues {
+class YamlReader : public SpeciesYamlValues {
  public:
-  explicit YamlReader(const std::string& file_name) : YamlValues(file_name) {}
+  explicit YamlReader(const std::string& file_name) : SpeciesYamlValues(file_name) {}
 
   Species read(const std::string& text);
 
  private:
   std::string name(const YAML::Node& node) const;
-  std::vector<Atom> atoms(const YAML::Node& node, std::vector<SourceLocation>& where) const;
-  void apply_isotopes(const YAML::Node& node, std::vector<Atom>& atoms) const;
-  std::vector<ElectronicLevel> electronic_levels(const YAML::Node& node) const;
-  std::vector<double> positive_list(const YAML::Node& node, const std::string& what) const;
-  std::map<std::string, int> formula(const YAML::Node& node) const;
-  std::vector<double> hessian(const YAML::Node& node, const YAML::Node* unit_node,
-                              std::size_t atom_count) const;
-  std::vector<HinderedRotor> hindered_rotors(const YAML::Node& node, const Species& species) const;
-  int atom_index(const YAML::Node& node, const std::string& what, std::size_t atom_count) const;
   void ensemble(const Entries& e, Species& species) const;
   void read_model_keys(const Entries& e, Species& species) const;
+  Species from_file(const Entries& e, const YAML::Node& node) const;
   void read_energy_keys(const Entries& e, Species& species) const;
 };
 
@@ -182,188 +182,21 @@ std::string YamlReader::name(const YAML::Node& node) const {
   return s;
 }
 
-std::vector<Atom> YamlReader::atoms(const YAML::Node& node, std::vector<SourceLocation>& where) const {
-  if (!node.IsSequence() || node.size() == 0)
-    error(node,
-          "'atoms' is " + describe(node) + ", expected a non-empty list of [symbol, x, y, z] in ångström");
-  std::vector<Atom> out;
-  for (const YAML::Node& item : node) {
-    std::string which = "atom " + std::to_string(out.size() + 1);
-    if (!item.IsSequence() || item.size() != 4)
-      error(item, which + " is " + describe(item) +
-                      (item.IsSequence() ? " of " + std::to_string(item.size()) : "") +
-                      ", expected [symbol, x, y, z] with coordinates in ångström");
-    const YAML::Node& label = item[0];
-    if (!label.IsScalar())
-      error(label,
-            which + " has symbol " + describe(label) + ", expected an element symbol or isotope label");
-    Atom atom = atom_of(resolve_label(label.Scalar(), at(label)));
-    for (int k = 0; k < 3; ++k)
-      atom.position_angstrom[k] = number(item[k + 1], which + " coordinate " + std::string(1, "xyz"[k]));
-    where.push_back(at(item));
-    out.push_back(std::move(atom));
-  }
-  return out;
-}
-
-void YamlReader::apply_isotopes(const YAML::Node& node, std::vector<Atom>& atoms) const {
-  if (!node.IsMap())
-    error(node, "'isotopes' is " + describe(node) +
-                    ", expected a map from 1-based atom index to label, e.g. {2: D}");
-  std::set<int> seen;
-  for (auto it = node.begin(); it != node.end(); ++it) {
-    int index = positive_integer(it->first, "isotope atom index");
-    if (index > static_cast<int>(atoms.size()))
-      error(it->first, "isotope atom index " + std::to_string(index) +
-                           " is past the last atom, expected 1 to " + std::to_string(atoms.size()));
-    if (!seen.insert(index).second)
-      error(it->first, "duplicate isotope atom index " + std::to_string(index) + ", expected each atom once");
-    std::string label = text(it->second, "isotope label");
-    AtomLabel resolved = resolve_label(label, at(it->second));
-    Atom& atom = atoms[static_cast<std::size_t>(index - 1)];
-    if (resolved.symbol != atom.symbol)
-      error(it->second, "isotope " + quote(label) + " is not an isotope of atom " + std::to_string(index) +
-                            " (" + atom.symbol + "), expected one of " +
-                            join(known_isotope_labels(atom.symbol)));
-    atom.isotope = resolved.isotope.empty() ? label : resolved.isotope;
-    atom.mass_number = resolved.mass_number;
-    atom.mass_amu = resolved.mass_amu;
-  }
-}
-
-std::vector<ElectronicLevel> YamlReader::electronic_levels(const YAML::Node& node) const {
-  if (!node.IsSequence() || node.size() == 0)
-    error(node, "'electronic_levels' is " + describe(node) +
-                    ", expected a non-empty list of {energy: cm^-1, degeneracy: integer}");
-  std::vector<ElectronicLevel> out;
-  double lowest = 0.0;
-  for (const YAML::Node& item : node) {
-    std::string which = "electronic level " + std::to_string(out.size() + 1);
-    if (!item.IsMap())
-      error(item, which + " is " + describe(item) + ", expected {energy: cm^-1, degeneracy: integer}");
-    Entries e = entries(item, which, {"energy", "degeneracy"});
-    const YAML::Node* energy = find(e, "energy");
-    const YAML::Node* degeneracy = find(e, "degeneracy");
-    if (!energy) error(item, which + " has no 'energy', expected energy above the ground level in cm^-1");
-    if (!degeneracy) error(item, which + " has no 'degeneracy', expected a positive whole number");
-    ElectronicLevel level;
-    if (energy->IsMap()) {
-      Entries ee = entries(*energy, which + " energy", {"value", "unit"});
-      const YAML::Node* value = find(ee, "value");
-      if (!value) error(*energy, which + " energy has no 'value', expected {value: number, unit: text}");
-      double v = number(*value, which + " energy");
-      std::string unit = unit_of(ee);
-      if (std::optional<double> cm1 = to_wavenumber_cm1(v, unit)) {
-        level.energy_cm1 = *cm1;
-      } else if (std::optional<double> J_per_mol = to_energy_J_per_mol(v, unit)) {
-        level.energy_cm1 = *J_per_mol / constants::wavenumber_J_per_mol;
-      } else {
-        error(*find(ee, "unit"), "unknown energy unit " + quote(unit) + ", expected one of " +
-                                     wavenumber_units_list() + ", " + energy_units_list());
-      }
-    } else {
-      level.energy_cm1 = number(*energy, which + " energy");
-    }
-    if (level.energy_cm1 < 0.0)
-      error(*energy, which + " energy is negative, expected an energy above the ground level (>= 0)");
-    level.degeneracy = positive_integer(*degeneracy, which + " degeneracy");
-    lowest = out.empty() ? level.energy_cm1 : std::min(lowest, level.energy_cm1);
-    out.push_back(level);
-  }
-  if (lowest != 0.0)
-    error(node,
-          "'electronic_levels' has no level at energy 0, expected the ground level at 0 and the others above "
-          "it");
-  return out;
-}
-
-std::vector<double> YamlReader::positive_list(const YAML::Node& node, const std::string& what) const {
-  std::vector<double> out;
-  if (node.IsScalar()) {
-    out.push_back(positive_number(node, what));
-  } else if (node.IsSequence()) {
-    for (const YAML::Node& item : node) out.push_back(positive_number(item, what + " value"));
-  } else {
-    error(node, what + " is " + describe(node) + ", expected a number or a list of 1 or 3 numbers");
-  }
-  if (out.size() != 1 && out.size() != 3)
-    error(node, what + " has " + std::to_string(out.size()) +
-                    " values, expected 1 (linear molecule) or 3 (nonlinear molecule)");
-  return out;
-}
-
-std::map<std::string, int> YamlReader::formula(const YAML::Node& node) const {
-  if (node.IsScalar() && !node.Scalar().empty()) return parse_formula_text(node.Scalar(), at(node));
-  if (!node.IsMap())
-    error(node,
-          "'formula' is " + describe(node) + ", expected text such as CH4 or a map such as {C: 1, H: 4}");
-  std::map<std::string, int> out;
-  for (auto it = node.begin(); it != node.end(); ++it) {
-    std::string symbol = text(it->first, "formula element");
-    if (!find_element(symbol)) {
-      std::string suggestion = closest_element_symbol(symbol);
-      error(it->first, "unknown element " + quote(symbol) + " in 'formula'" +
-                           (suggestion.empty() ? ", expected element symbols such as C, H, O"
-                                               : ", did you mean '" + suggestion + "'?"));
-    }
-    if (out.count(symbol)) error(it->first, "duplicate element " + quote(symbol) + " in 'formula'");
-    out[symbol] = positive_integer(it->second, "count of " + symbol);
-  }
-  return out;
-}
-
-// The flat `hessian` list: the full 3N×3N matrix row-major, or its lower triangle row by
-// row (H11, H21, H22, H31, ...). Returns the full matrix, row-major, in J/m².
-std::vector<double> YamlReader::hessian(const YAML::Node& node, const YAML::Node* unit_node,
-                                        std::size_t atom_count) const {
-  double factor = *to_force_constant_J_per_m2(1.0, "hartree/bohr^2");
-  if (unit_node) {
-    std::string unit = text(*unit_node, "'hessian_unit'");
-    std::optional<double> f = to_force_constant_J_per_m2(1.0, unit);
-    if (!f)
-      error(*unit_node,
-            "unknown Hessian unit " + quote(unit) + ", expected one of " + force_constant_units_list());
-    factor = *f;
-  }
-  if (!node.IsSequence())
-    error(node, "'hessian' is " + describe(node) +
-                    ", expected a flat list of numbers (full 3N×3N matrix row-major, or its lower triangle)");
-  const std::size_t n = 3 * atom_count;
-  const std::size_t full = n * n;
-  const std::size_t triangle = n * (n + 1) / 2;
-  if (node.size() != full && node.size() != triangle)
-    error(node, "'hessian' has " + std::to_string(node.size()) + " values, expected " + std::to_string(full) +
-                    " (full 3N×3N matrix, row-major) or " + std::to_string(triangle) +
-                    " (lower triangle, row by row) for N = " + std::to_string(atom_count) + " atoms");
-  std::vector<double> values;
-  std::vector<YAML::Node> nodes;
-  for (const YAML::Node& item : node) {
-    values.push_back(number(item, "Hessian value " + std::to_string(values.size() + 1)));
-    nodes.push_back(item);
-  }
-  std::vector<double> out(full);
-  if (values.size() == triangle) {
-    std::size_t k = 0;
-    for (std::size_t i = 0; i < n; ++i)
-      for (std::size_t j = 0; j <= i; ++j, ++k) out[i * n + j] = out[j * n + i] = values[k] * factor;
-    return out;
-  }
-  double largest = 0.0;
-  for (double v : values) largest = std::max(largest, std::abs(v));
-  for (std::size_t i = 0; i < n; ++i)
-    for (std::size_t j = 0; j < i; ++j) {
-      const double lower = values[i * n + j];
-      const double upper = values[j * n + i];
-      if (std::abs(lower - upper) > hessian_symmetry_tolerance * largest)
-        error(nodes[i * n + j], "'hessian' is not symmetric: row " + std::to_string(i + 1) + ", column " +
-                                    std::to_string(j + 1) + " is " + quote(nodes[i * n + j].Scalar()) +
-                                    " but row " + std::to_string(j + 1) + ", column " +
-                                    std::to_string(i + 1) + " is " + quote(nodes[j * n + i].Scalar()) +
-                                    ", expected equal values (within 1e-4 of the largest element)");
-      out[i * n + j] = out[j * n + i] = 0.5 * (lower + upper) * factor;
-    }
-  for (std::size_t i = 0; i < n; ++i) out[i * n + i] = values[i * n + i] * factor;
-  return out;
+// The species of a `from:` QC exchange file (path relative to this file), checked against
+// the keys that cannot be combined with it.
+Species YamlReader::from_file(const Entries& e, const YAML::Node& node) const {
+  for (const std::string& key : not_with_from)
+    if (find(e, key))
+      error(e.at(key).key, "key " + quote(key) +
+                               " cannot be combined with 'from' (the file gives the geometry " +
+                               "and force field), expected 'frequencies' or 'isotopes' to change them");
+  const std::string given = text(node, "'from'");
+  const std::filesystem::path path = std::filesystem::path(given).is_absolute()
+                                         ? std::filesystem::path(given)
+                                         : std::filesystem::path(file()).parent_path() / given;
+  if (!std::filesystem::is_regular_file(path))
+    error(node, "'from' file " + quote(given) + " does not exist (paths are relative to this file)");
+  return read_exchange_file(path.string());
 }
 
 Species YamlReader::read(const std::string& text) {
@@ -378,11 +211,11 @@ Species YamlReader::read(const std::string& text) {
 
   Entries e = entries(root, "the species", yaml_keys);
 
-  Species species;
-  species.origin = {file(), 0, 0};
+  const YAML::Node* from_node = find(e, "from");
+  Species species = from_node ? from_file(e, *from_node) : Species{};
   const YAML::Node* name_node = find(e, "name");
-  if (!name_node) error(root, "missing required key 'name', expected a label for the species");
-  species.name = name(*name_node);
+  if (!name_node && !from_node) error(root, "missing required key 'name', expected a label for the species");
+  if (name_node) species.name = name(*name_node);
   species.origin = at(root);
   for (const auto& [key, entry] : e) species.key_locations[key] = at(entry.key);
   if (find(e, "conformers")) {
@@ -461,6 +294,9 @@ Species YamlReader::read(const std::string& text) {
     monatomic = rotor.moments_amu_A2.empty();
     species.rotor_data = rotor;
     if (const YAML::Node* f = find(e, "formula")) species.formula = formula(*f);
+  } else if (from_node) {
+    if (const YAML::Node* iso = find(e, "isotopes")) apply_isotopes(*iso, species.atoms);
+    monatomic = species.atoms.size() == 1;
   } else {
     for (const char* key : {"rotational_constants", "moments_of_inertia", "linear"})
       if (find(e, key))
@@ -483,19 +319,31 @@ Species YamlReader::read(const std::string& text) {
             "'hessian' needs 'atoms', expected Cartesian coordinates of the atoms the Hessian refers to");
     species.hessian_J_per_m2 = hessian(*hessian_node, hessian_unit, species.atoms.size());
   } else if (const YAML::Node* f = find(e, "frequencies")) {
+    species.hessian_J_per_m2.reset();  // frequencies here replace a `from:` file's Hessian or modes
+    species.frequencies_cm1.clear();
     for (const Located& nu : wavenumbers(*f, "'frequencies'", false)) {
       if (nu.value == 0.0)
         error(nu.node, "frequency " + std::to_string(species.frequencies_cm1.size() + 1) +
                            " is 0, expected a non-zero wavenumber (negative for imaginary)");
       species.frequencies_cm1.push_back(nu.value);
     }
-  } else if (!monatomic) {
+  } else if (from_node && !monatomic && !species.hessian_J_per_m2 && species.frequencies_cm1.empty()) {
+    error(*from_node, "'from' file " + quote(from_node->Scalar()) +
+                          " gives no Hessian or frequencies (a molecule, or an energy or gradient result), " +
+                          "expected 'frequencies' here");
+  } else if (!monatomic && !from_node) {
     error(root, "missing required key 'frequencies', expected a list of wavenumbers in cm^-1 " +
                     std::string("or a 'hessian' (only a single atom has neither)"));
   }
 
   if (const YAML::Node* s = find(e, "symmetry_number"))
     species.symmetry_number = positive_integer(*s, "'symmetry_number'");
+  if (const YAML::Node* q = find(e, "charge")) {
+    const double charge = number(*q, "'charge'");
+    if (charge != std::floor(charge) || std::abs(charge) > 1000)
+      error(*q, "'charge' is " + quote(q->Scalar()) + ", expected a whole number of elementary charges");
+    species.charge = static_cast<int>(charge);
+  }
   const YAML::Node* spin = find(e, "spin_multiplicity");
   const YAML::Node* levels = find(e, "electronic_levels");
   if (spin && levels)
@@ -557,111 +405,6 @@ Species YamlReader::read(const std::string& text) {
     species.hindered_rotors = hindered_rotors(*h, species);
   }
   return species;
-}
-
-int YamlReader::atom_index(const YAML::Node& node, const std::string& what, std::size_t atom_count) const {
-  const int index = positive_integer(node, what);
-  if (static_cast<std::size_t>(index) > atom_count)
-    error(node, what + " is atom " + std::to_string(index) + ", expected an atom number from 1 to " +
-                    std::to_string(atom_count));
-  return index - 1;
-}
-
-std::vector<HinderedRotor> YamlReader::hindered_rotors(const YAML::Node& node, const Species& species) const {
-  if (!node.IsSequence() || node.size() == 0)
-    error(node, "'hindered_rotors' is " + describe(node) +
-                    ", expected a list of {bond: [i, j], symmetry, barrier or scan, replaces}");
-  std::vector<HinderedRotor> out;
-  for (const YAML::Node& item : node) {
-    const std::string which = "hindered rotor " + std::to_string(out.size() + 1);
-    if (!item.IsMap())
-      error(item, which + " is " + describe(item) +
-                      ", expected {bond: [i, j], symmetry, barrier or scan, replaces}");
-    Entries e = entries(item, which, {"bond", "symmetry", "barrier", "scan", "replaces", "top"});
-    HinderedRotor r;
-    r.where = at(item);
-    const YAML::Node* bond = find(e, "bond");
-    if (!bond) error(item, which + " has no 'bond', expected the two 1-based atoms of the rotation axis");
-    if (!bond->IsSequence() || bond->size() != 2)
-      error(*bond, which + " 'bond' is " + describe(*bond) + ", expected two atom numbers [i, j]");
-    const std::size_t n = species.atoms.size();
-    r.bond_atoms = {atom_index((*bond)[0], which + " bond", n), atom_index((*bond)[1], which + " bond", n)};
-    if (r.bond_atoms[0] == r.bond_atoms[1])
-      error(*bond, which + " 'bond' names atom " + std::to_string(r.bond_atoms[0] + 1) +
-                       " twice, expected two different atoms");
-    const YAML::Node* symmetry = find(e, "symmetry");
-    if (!symmetry)
-      error(item, which + " has no 'symmetry', expected the internal symmetry number (1, 2, 3, ...)");
-    r.symmetry = positive_integer(*symmetry, which + " 'symmetry'");
-    const YAML::Node* barrier = find(e, "barrier");
-    const YAML::Node* scan = find(e, "scan");
-    if (barrier && scan) error(e["scan"].key, which + " has both 'barrier' and 'scan', expected one of them");
-    if (!barrier && !scan)
-      error(item, which + " has neither 'barrier' nor 'scan', expected a barrier in kJ/mol or a scan");
-    if (barrier) {
-      const double V = energy_J_per_mol(*barrier, which + " 'barrier'") / 1e3;
-      if (V < 0.0)
-        error(*barrier, which + " 'barrier' is " + quote(barrier->Scalar()) +
-                            ", expected a barrier height >= 0 in kJ/mol");
-      r.barrier_J_per_mol = V * 1e3;
-    } else {
-      // {value: [[degrees, E], ...], unit: U} gives the energies in another unit.
-      YAML::Node points = *scan;
-      double J_per_unit = 1e3;
-      if (scan->IsMap()) {
-        Entries se = entries(*scan, which + " 'scan'", {"value", "values", "unit"});
-        const YAML::Node* list = find(se, "value") ? find(se, "value") : find(se, "values");
-        if (!list)
-          error(*scan, which + " 'scan' has no 'value', expected {value: [[degrees, E], ...], unit: U}");
-        points = *list;
-        if (const YAML::Node* unit = find(se, "unit")) {
-          const std::string u = text(*unit, "'unit'");
-          const std::optional<double> factor = to_energy_J_per_mol(1.0, u);
-          if (!factor)
-            error(*unit, "unknown energy unit " + quote(u) + ", expected one of " + energy_units_list());
-          J_per_unit = *factor;
-        }
-      }
-      if (!points.IsSequence())
-        error(*scan, which + " 'scan' is " + describe(*scan) + ", expected a list of [degrees, kJ/mol]");
-      for (const YAML::Node& point : points) {
-        if (!point.IsSequence() || point.size() != 2)
-          error(point, which + " scan point is " + describe(point) + ", expected [degrees, kJ/mol]");
-        r.scan.push_back(
-            {number(point[0], which + " scan angle"), number(point[1], which + " scan energy") * J_per_unit});
-      }
-    }
-    if (const YAML::Node* top = find(e, "top")) {
-      if (!top->IsSequence() || top->size() == 0)
-        error(*top, which + " 'top' is " + describe(*top) +
-                        ", expected a list of the atoms on the side of bond atom " +
-                        std::to_string(r.bond_atoms[0] + 1));
-      for (const YAML::Node& a : *top) r.top_atoms.push_back(atom_index(a, which + " 'top'", n));
-      const auto has = [&r](int i) {
-        return std::find(r.top_atoms.begin(), r.top_atoms.end(), i) != r.top_atoms.end();
-      };
-      if (!has(r.bond_atoms[0]) || has(r.bond_atoms[1]))
-        error(*top, which + " 'top' must hold bond atom " + std::to_string(r.bond_atoms[0] + 1) +
-                        " and not atom " + std::to_string(r.bond_atoms[1] + 1) +
-                        ", expected the atoms on the side of the first bond atom");
-    }
-    const YAML::Node* replaces = find(e, "replaces");
-    if (!replaces)
-      error(item, which + " has no 'replaces', expected the wavenumber of the torsional mode it replaces");
-    r.replaces_cm1 = positive_number(*replaces, which + " 'replaces'");
-    if (!species.frequencies_cm1.empty()) {
-      const auto closest = std::min_element(
-          species.frequencies_cm1.begin(), species.frequencies_cm1.end(),
-          [&r](double a, double b) { return std::abs(a - r.replaces_cm1) < std::abs(b - r.replaces_cm1); });
-      if (std::abs(*closest - r.replaces_cm1) > replaces_tolerance_cm1)
-        error(*replaces,
-              fmt::format("{} 'replaces' {:g} cm^-1 matches no frequency within {:g} cm^-1, expected a "
-                          "given frequency (closest: {:g})",
-                          which, r.replaces_cm1, replaces_tolerance_cm1, *closest));
-    }
-    out.push_back(std::move(r));
-  }
-  return out;
 }
 
 }  // namespace

@@ -1,8 +1,10 @@
 // The pieces every species reader shares; see species_builder.hpp.
 #include "vibtherm/species_builder.hpp"
 
+#include <algorithm>
 #include <cctype>
 #include <charconv>
+#include <cmath>
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/elements.hpp"
@@ -102,6 +104,51 @@ AtomLabel resolve_label(std::string_view label, const SourceLocation& where) {
   else
     message += ", expected an element symbol such as C or Cl, or an isotope label such as D or C13";
   fail(where, message);
+}
+
+std::optional<AtomLabel> isotope_with_mass(std::string_view symbol, double mass_amu) {
+  std::optional<AtomLabel> best;
+  for (const std::string& label : known_isotope_labels(symbol)) {
+    const std::optional<IsotopeChoice> iso = find_isotope(label);
+    if (!iso || !(std::abs(iso->mass_amu - mass_amu) <= isotope_mass_tolerance_amu)) continue;
+    const std::optional<ElementInfo> element = find_element(symbol);
+    AtomLabel out{iso->symbol, "", iso->mass_number, iso->mass_amu};
+    if (element && iso->mass_number != element->mass_number) out.isotope = label;
+    // Of several labels for one isotope (H2 and D), the shortest.
+    if (!best || (best->mass_number == out.mass_number && out.isotope.size() < best->isotope.size()))
+      best = out;
+  }
+  return best;
+}
+
+std::optional<std::pair<std::size_t, std::size_t>> hessian_asymmetry(const std::vector<double>& full,
+                                                                     std::size_t n) {
+  double largest = 0.0;
+  for (double v : full) largest = std::max(largest, std::abs(v));
+  for (std::size_t i = 0; i < n; ++i)
+    for (std::size_t j = 0; j < i; ++j)
+      if (std::abs(full[i * n + j] - full[j * n + i]) > hessian_symmetry_tolerance * largest)
+        return std::pair{i, j};
+  return std::nullopt;
+}
+
+std::vector<double> symmetrised_hessian(const std::vector<double>& full, std::size_t n, double factor) {
+  std::vector<double> out(n * n);
+  for (std::size_t i = 0; i < n; ++i) {
+    for (std::size_t j = 0; j < i; ++j)
+      out[i * n + j] = out[j * n + i] = 0.5 * (full[i * n + j] + full[j * n + i]) * factor;
+    out[i * n + i] = full[i * n + i] * factor;
+  }
+  return out;
+}
+
+std::vector<double> hessian_from_lower_triangle(const std::vector<double>& triangle, std::size_t n,
+                                                double factor) {
+  std::vector<double> out(n * n);
+  std::size_t k = 0;
+  for (std::size_t i = 0; i < n; ++i)
+    for (std::size_t j = 0; j <= i; ++j, ++k) out[i * n + j] = out[j * n + i] = triangle[k] * factor;
+  return out;
 }
 
 std::map<std::string, int> parse_formula_text(std::string_view text, const SourceLocation& where) {

@@ -20,7 +20,9 @@ std::string lowercase_extension(const std::string& path) {
   return ext;
 }
 
-bool is_species_extension(const std::string& ext) { return ext == ".yaml" || ext == ".yml" || ext == ".xyz"; }
+bool is_species_extension(const std::string& ext) {
+  return ext == ".yaml" || ext == ".yml" || ext == ".xyz" || ext == ".json" || ext == ".molden";
+}
 
 namespace {
 
@@ -47,7 +49,7 @@ void expand_one(const std::string& arg, const SourceLocation& where, int depth, 
       fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where, "cannot list directory: " + ec.message());
     if (found.empty())
       fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where,
-           "directory holds no species files, expected files ending in .yaml, .yml or .xyz");
+           "directory holds no species files, expected files ending in .yaml, .yml, .xyz, .json or .molden");
     std::sort(found.begin(), found.end());
     if (out.size() + found.size() > max_species_paths)
       fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where, too_many());

@@ -368,6 +368,7 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
   p.species = species;
   p.options = options;
   p.is_gas = species.phase == Phase::gas;
+  p.notes = species.reader_notes;
   check_model_options(options);
   limits::check_species(species);
   if (species.symmetry_number < 1)

@@ -36,6 +36,16 @@ Reaction water_dissociation(const ModelOptions& o = {}, double sign = 1.0) {
   return r;
 }
 
+// Whether the species model carries a net charge, and setting it where it does.
+template <class S>
+constexpr bool has_charge = requires(S s) {
+  s.charge;
+};
+template <class S>
+void set_charge(S& s, int charge) {
+  if constexpr (has_charge<S>) s.charge = charge;
+}
+
 bool close(double a, double b, double rel) {
   return std::abs(a - b) <= rel * std::max(std::abs(a), std::abs(b));
 }
@@ -99,6 +109,20 @@ TEST_CASE("unbalanced reactions and missing enthalpies are named") {
                        doctest::Contains("species 'H2O' (reaction 'w') has neither"), InputError);
   CHECK_THROWS_WITH_AS(solve_unknown_formation(water_dissociation(), 0),
                        doctest::Contains("species 'H2O' has no 'electronic_energy'"), InputError);
+}
+
+TEST_CASE("charge balance") {
+  if constexpr (has_charge<Species>) {
+    // H2O = H2 + ½O2 with one side charged: the elements balance, the charge does not.
+    Reaction r = water_dissociation();
+    set_charge(r.terms[1].prepared.species, 1);
+    CHECK_THROWS_WITH_AS(reaction_table(r, {300.0}),
+                         doctest::Contains("does not balance in charge: products minus "
+                                           "reactants +1 e"),
+                         InputError);
+  } else {
+    CHECK_NOTHROW(check_reaction_balance(water_dissociation()));  // every species neutral
+  }
 }
 
 TEST_CASE("electronic basis and the unknown ΔfH° (hand computation)") {

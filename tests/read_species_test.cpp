@@ -257,7 +257,8 @@ TEST_CASE("reading files and expanding paths") {
   CHECK_THROWS_WITH_AS(
       read_species_file((dir / "set" / "notes.txt").string()),
       ((dir / "set" / "notes.txt").string() +
-       ": error: unknown file type '.txt', expected a species file ending in .yaml, .yml or .xyz")
+       ": error: content not recognised as a species file (first line 'x', file type '.txt'), expected YAML "
+       "(.yaml, .yml), XYZ with frequencies (.xyz), QCSchema JSON (.json) or Molden normal modes (.molden)")
           .c_str(),
       InputError);
   CHECK_THROWS_AS(read_species_file((dir / "nothing.yaml").string()), InputError);

@@ -31,8 +31,8 @@ const char* enthalpy_basis_name(EnthalpyBasis basis);  // "electronic energies",
 // "H2O = H2 + 0.5 O2" from the species' names.
 std::string reaction_equation(const Reaction& reaction);
 
-// Refuses (InputError at the reaction file) a reaction whose elements do not balance,
-// naming each element and its surplus, and one with an adsorbate.
+// Refuses (InputError at the reaction file) a reaction whose elements or charges do not
+// balance, naming each element's surplus or the charge surplus, and one with an adsorbate.
 void check_reaction_balance(const Reaction& reaction);
 
 // Electronic energies when every species has one, else enthalpies of formation when every

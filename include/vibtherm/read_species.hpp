@@ -5,6 +5,8 @@
 #include <cstddef>
 #include <string>
 
+#include "vibtherm/read_molden.hpp"
+#include "vibtherm/read_qcschema.hpp"
 #include "vibtherm/read_xyz.hpp"
 #include "vibtherm/read_yaml.hpp"
 #include "vibtherm/species.hpp"
@@ -18,9 +20,17 @@ inline constexpr std::size_t max_species_file_bytes = 32u << 20;  // 32 MiB
 inline constexpr std::size_t max_species_atoms = 2000;
 inline constexpr std::size_t max_species_frequencies = 6000;
 
-// Reads a file, choosing the reader by extension (.yaml/.yml, .xyz). Only regular files
-// are read (not /dev/zero, a FIFO or a directory). When `bytes` is given it receives the
-// file's content, e.g. for a checksum without reading the file again.
+// Reads a file, choosing the reader by content and extension (species_format.hpp). Only
+// regular files are read (not /dev/zero, a FIFO or a directory). When `bytes` is given it
+// receives the file's content, e.g. for a checksum without reading the file again.
 Species read_species_file(const std::string& path, std::string* bytes = nullptr);
+
+// The same for a text already read; `path` names it in errors and decides by extension.
+Species read_species_text(const std::string& text, const std::string& path);
+
+// Reads a QC exchange file (QCSchema JSON or Molden normal modes) named by a species file's
+// `from:`: its vibrations may be missing, the species file then gives them. Other formats
+// are refused.
+Species read_exchange_file(const std::string& path, std::string* bytes = nullptr);
 
 }  // namespace vibtherm

@@ -100,6 +100,11 @@ struct Species {
   // Bonds for bond-additivity corrections (input key `bonds`, 0-based atom pairs); when
   // absent they are perceived from the geometry (bonds.hpp).
   std::optional<std::vector<std::array<int, 2>>> bonds;
+  int charge = 0;  // net charge in elementary charges (input key `charge`, or a QC exchange file)
+  // What the reader wants the user told (a QC file's method and basis, modes it dropped):
+  // prepare_species passes them on as notes.
+  std::vector<std::string> reader_notes;
+  std::string computed_with;  // a QC exchange file's method/basis ("B3LYP/def2-TZVP"); empty: unknown
   Phase phase = Phase::gas;
   // Adsorbate only: the site's element symbol (e.g. "Pt"), added once to the composition of
   // the NASA record as surface-kinetics files expect; not part of the molar mass. Empty: none.

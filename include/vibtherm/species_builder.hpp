@@ -3,7 +3,9 @@
 // a valid Species. Each format's reader (read_yaml, read_xyz, ...) parses; this builds.
 #pragma once
 
+#include <cstddef>
 #include <map>
+#include <optional>
 #include <string>
 #include <string_view>
 #include <utility>
@@ -40,6 +42,33 @@ AtomLabel resolve_label(std::string_view label, const SourceLocation& where);
 
 // An atom of that element and isotope at the origin; the reader sets the position.
 Atom atom_of(const AtomLabel& label);
+
+// The isotope of `symbol` (an element symbol) whose mass is within
+// isotope_mass_tolerance_amu of `mass_amu`, labelled as a species file would write it (the
+// plain symbol for the most abundant isotope, D and T for hydrogen); nullopt when none is.
+// Readers of files that give masses (QCSchema) use it, so average atomic weights are refused.
+constexpr double isotope_mass_tolerance_amu = 5e-5;
+std::optional<AtomLabel> isotope_with_mass(std::string_view symbol, double mass_amu);
+
+// A full Cartesian Hessian may differ from its transpose by this much, relative to its
+// largest element, and is then symmetrised: finite-difference Hessians and values printed to
+// five or six significant digits are slightly asymmetric, while a misordered or transposed
+// block is asymmetric at the size of the elements themselves.
+constexpr double hessian_symmetry_tolerance = 1e-4;
+
+// The first element (row, column), row > column, of the n×n row-major `full` that differs
+// from its mirror by more than hessian_symmetry_tolerance × the largest |element|; nullopt
+// when there is none.
+std::optional<std::pair<std::size_t, std::size_t>> hessian_asymmetry(const std::vector<double>& full,
+                                                                     std::size_t n);
+
+// (H + Hᵀ)/2 × factor, row-major.
+std::vector<double> symmetrised_hessian(const std::vector<double>& full, std::size_t n, double factor);
+
+// The full n×n row-major matrix of a lower triangle given row by row (H11, H21, H22, ...),
+// times factor.
+std::vector<double> hessian_from_lower_triangle(const std::vector<double>& triangle, std::size_t n,
+                                                double factor);
 
 // Parses "CH4", "C2H5OH" into element counts; repeated elements add up.
 std::map<std::string, int> parse_formula_text(std::string_view text, const SourceLocation& where);

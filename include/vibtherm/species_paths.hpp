@@ -13,7 +13,8 @@ namespace vibtherm {
 // The extension of `path` in lower case, with its dot (".yaml"); empty when it has none.
 std::string lowercase_extension(const std::string& path);
 
-// True for the extensions of species files (.yaml, .yml, .xyz).
+// True for the extensions of species files (.yaml, .yml, .xyz, .json, .molden): the files a
+// directory argument expands to.
 bool is_species_extension(const std::string& extension);
 
 // Limits of the expansion: manifests listing manifests at most this deep, and at most

@@ -30,7 +30,7 @@ ARGUMENT_CASES = [
      "error: temperature list '1e300': 1e+300 K is outside 1 to 100000 K"),
     (["../data/water.yaml", "--scale", "1e-320"], "error: frequency scale factor is 9.99989e-321, expected 0.1 to 10"),
     (["../data/water.yaml", "--pressure", "1e-30Pa"], "error: pressure is 1e-30, expected 1e-06 to 1e+09 Pa"),
-    (["/dev/zero"], "/dev/zero: error: unknown file type '(none)', expected a species file ending in .yaml, .yml or .xyz"),
+    (["/dev/zero"], "/dev/zero: error: is not a regular file (a device, FIFO or socket), expected a species file"),
     (["does-not-exist.yaml"],
      "does-not-exist.yaml: error: cannot read file (missing or not readable), expected a species file"),
 ]

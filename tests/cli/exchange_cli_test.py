@@ -1,0 +1,57 @@
+#!/usr/bin/env python3
+"""Species read from QC exchange files through the command line: the QCSchema Hessian result
+and the Molden files of the water model (tests/data/make_water_exchange_files.py, made from
+water-model-hessian-full.yaml; the model force field, not data) give the YAML species' table.
+
+Usage: exchange_cli_test.py VIBTHERM_EXECUTABLE REPO_ROOT
+"""
+import json
+import math
+import pathlib
+import sys
+
+from harness import Checks
+
+R = 8.314462618  # J/(mol K), CODATA 2018 (N_A k_B)
+
+
+def table(checks, *files):
+    result = checks.run("table", *files, "--temps", "200,298.15,1000,3000", "--format", "json")
+    if result.returncode != 0:
+        return None, result.stderr
+    return {s["name"]: s["rows"] for s in json.loads(result.stdout)["species"]}, result.stderr
+
+
+def close(a, b, rel):
+    return abs(a - b) <= rel * max(abs(a), abs(b), 1e-300)
+
+
+def main():
+    exe, root = sys.argv[1], pathlib.Path(sys.argv[2])
+    data = root / "tests" / "data"
+    checks = Checks(exe)
+    tables, stderr = table(checks, str(data / "water-model-hessian-full.yaml"), str(data / "water-model-hessian.json"),
+                           str(data / "water-model.molden"), str(data / "water-model-all-modes.molden"))
+    checks.check("table reads YAML, QCSchema and Molden in one run", tables is not None, stderr)
+    if tables is None:
+        checks.finish()
+    ref = tables["water-model-hessian-full"]
+    # The exchange files carry no symmetry number: σ = 1 instead of 2 raises S by R ln 2
+    # (textbook identity, S_rot contains −R ln σ) and leaves Cp and H unchanged.
+    for name in ("water-model-hessian", "water-model", "water-model-all-modes"):
+        rows = tables.get(name)
+        checks.check(f"{name}: a table", rows is not None and len(rows) == 4, sorted(tables))
+        if rows is None:
+            continue
+        ok = all(close(r["Cp"], q["Cp"], 1e-9) and close(r["H_minus_H298"], q["H_minus_H298"], 1e-9) and
+                 abs(q["S"] - r["S"] - R * math.log(2)) < 1e-6 for r, q in zip(ref, rows))
+        checks.check(f"{name}: Cp and H as the YAML's, S higher by R ln 2", ok, f"{ref} vs {rows}")
+    checks.check("the dropped Molden entries are stated", "dropped 6 near-zero [FREQ] entries" in stderr, stderr)
+    result = checks.run("table", str(root / "tests" / "bad" / "qcschema_gradient.json"))
+    checks.check("a gradient result is refused in one line, exit 2",
+                 result.returncode == 2 and len(result.stderr.strip().splitlines()) == 1, result.stderr)
+    checks.finish()
+
+
+if __name__ == "__main__":
+    main()
