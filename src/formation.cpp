@@ -7,19 +7,6 @@
 #include "vibtherm/formation_data.hpp"
 
 namespace vibtherm {
-namespace {
-
-// The net charge of a species in e, read only where the species model has the member
-// (`if constexpr`); without it every species is neutral.
-template <class S>
-int net_charge(const S& s) {
-  if constexpr (requires { s.charge; })
-    return static_cast<int>(s.charge);
-  else
-    return 0;
-}
-
-}  // namespace
 
 FormationEnthalpy formation_from_atomization_energy(const std::map<std::string, int>& formula,
                                                     double D0_J_per_mol, double H298_minus_H0_J_per_mol,
@@ -49,7 +36,7 @@ FormationEnthalpy atomization_formation_enthalpy(const PreparedSpecies& prepared
          fmt::format("species '{}' has no 'electronic_energy', expected one (hartree) to compute its "
                      "enthalpy of formation with method '{}'",
                      s.name, method.label));
-  if (const int charge = net_charge(s); charge != 0)
+  if (const int charge = s.charge; charge != 0)
     fail(s.origin,
          fmt::format("species '{}' has charge {:+d}: the atomization route here is for neutral species, "
                      "expected 'enthalpy_of_formation' or a reaction (--formation-reactions) for an ion",

@@ -18,17 +18,6 @@ constexpr double standard_concentration_mol_per_m3 = 1000.0;  // c° = 1 mol/L
 
 std::string number_text(double v) { return fmt::format("{:g}", v); }
 
-// The net charge of a species in e. The charge is read only where the species model has
-// the member (`if constexpr`), so this module builds against models with and without it;
-// without it every species is neutral.
-template <class S>
-double net_charge(const S& s) {
-  if constexpr (requires { s.charge; })
-    return static_cast<double>(s.charge);
-  else
-    return 0.0;
-}
-
 // The pressure of the species' standard state at T, and the pressure Kp refers to.
 std::pair<double, double> state_and_reference_Pa(const ModelOptions& o, double T_K) {
   if (o.standard_state == StandardState::molar)
@@ -69,7 +58,7 @@ void check_reaction_balance(const Reaction& reaction) {
     }
   }
   double charge = 0.0;
-  for (const auto& t : reaction.terms) charge += t.coefficient * net_charge(t.prepared.species);
+  for (const auto& t : reaction.terms) charge += t.coefficient * t.prepared.species.charge;
   if (std::abs(charge) > 1e-9 * std::max(1.0, scale))
     fail(reaction.origin,
          fmt::format("reaction '{}' does not balance in charge: products minus reactants {:+g} e, "

@@ -4,7 +4,7 @@ checks the promise of design.md section 7 on each: the run ends with exit 0, 1 o
 never by a signal or a hang; on 2 it printed exactly one error line naming the file and
 wrote nothing; on 0 every number in the output is finite (no nan or inf).
 
-Species files (.yaml, .xyz) go through `table`, NASA files (.dat) through `eval`. The
+Species files (.yaml, .xyz, QCSchema .json, Molden .molden) go through `table`, NASA files (.dat) through `eval`. The
 mutations are byte- and line-level edits (a number replaced by an extreme or non-finite
 value, lines deleted, duplicated or swapped, bytes flipped, YAML syntax inserted, the file
 cut short), one to three per input, from a fixed seed so a failure can be replayed.
@@ -94,7 +94,7 @@ with tempfile.TemporaryDirectory() as tmp:
     # (conformer ensembles name their members relative to themselves).
     work = os.path.join(tmp, "data")
     shutil.copytree(data, work)
-    seeds = sorted(f for f in os.listdir(data) if f.endswith((".yaml", ".xyz", ".dat")))
+    seeds = sorted(f for f in os.listdir(data) if f.endswith((".yaml", ".xyz", ".json", ".molden", ".dat")))
     rng = random.Random(seed)
     jobs = []
     for k in range(count):
