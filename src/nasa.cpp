@@ -69,6 +69,11 @@ double polynomial_T_max_K(const NasaPolynomial& p) {
   return std::get<Nasa9>(p).T_max_K();
 }
 
+bool polynomial_is_gas(const NasaPolynomial& p) {
+  if (const auto* n7 = std::get_if<Nasa7>(&p)) return n7->phase == 'G';
+  return std::get<Nasa9>(p).phase == 0;
+}
+
 ThermoPoint polynomial_table_row(const NasaPolynomial& p, double T_K) {
   const NasaProperties at = polynomial_at(p, T_K);
   const double H298 = polynomial_at(p, constants::reference_temperature_K).H_J_per_mol();
@@ -76,6 +81,7 @@ ThermoPoint polynomial_table_row(const NasaPolynomial& p, double T_K) {
   row.T_K = T_K;
   row.Cp_J_per_mol_K = at.Cp_J_per_mol_K();
   row.S_J_per_mol_K = at.S_J_per_mol_K();
+  if (polynomial_is_gas(p)) row.Cv_J_per_mol_K = row.Cp_J_per_mol_K - R;  // Cp − Cv = R (ideal gas)
   row.H_minus_H298_J_per_mol = at.H_J_per_mol() - H298;
   // G = H − TS (common practice).
   row.G_minus_H298_J_per_mol = row.H_minus_H298_J_per_mol - T_K * row.S_J_per_mol_K;

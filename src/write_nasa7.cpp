@@ -112,7 +112,9 @@ std::string write_nasa7(const std::vector<Nasa7>& species, const Nasa7WriteOptio
   std::string out;
   for (const auto& c : options.header_comments) out += "! " + c + '\n';
   if (options.thermo_wrapper) {
-    out += "THERMO\n";
+    // THERMO ALL, not THERMO: kinetics-input converters take the default-temperature line
+    // that follows only after THERMO ALL (with bare THERMO they expect records at once).
+    out += "THERMO ALL\n";
     // Default temperatures T_low, T_mid, T_high for records that omit them: the widest
     // range of the file and the most common T_mid.
     double lo = 300.0, mid = 1000.0, hi = 5000.0;

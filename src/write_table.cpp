@@ -37,12 +37,19 @@ std::string text_piece(const SpeciesTable& table, const TableWriteOptions& optio
     // Headings and a units line; widths are fixed so columns line up across species.
     std::string head = fmt::format("{:>9} {:>9}", "T", "Cp");
     std::string units = fmt::format("{:>9} {:>9}", "K", "J/mol/K");
-    if (model) head += fmt::format(" {:>9}", "Cv"), units += fmt::format(" {:>9}", "J/mol/K");
+    const bool cv = model || table.has_cv;
+    const bool absolute = table.H_J_per_mol.size() == table.rows.size() &&
+                          table.G_J_per_mol.size() == table.rows.size() && !table.rows.empty();
+    if (cv) head += fmt::format(" {:>9}", "Cv"), units += fmt::format(" {:>9}", "J/mol/K");
     head += fmt::format(" {:>9} {:>10}", "S", "H-H298");
     units += fmt::format(" {:>9} {:>10}", "J/mol/K", "kJ/mol");
     if (model) head += fmt::format(" {:>9}", "H-H0"), units += fmt::format(" {:>9}", "kJ/mol");
     head += fmt::format(" {:>10} {:>11}", "G-H298", "-(G-H298)/T");
     units += fmt::format(" {:>10} {:>11}", "kJ/mol", "J/mol/K");
+    if (absolute) {
+      head += fmt::format(" {:>11} {:>11}", "H", "G");
+      units += fmt::format(" {:>11} {:>11}", "kJ/mol", "kJ/mol");
+    }
     if (breakdown) {
       for (const auto& m : motions) {
         const std::size_t w = column_width(m);
@@ -66,11 +73,13 @@ std::string text_piece(const SpeciesTable& table, const TableWriteOptions& optio
     for (std::size_t i = 0; i < table.rows.size(); ++i) {
       const auto& r = table.rows[i];
       std::string line = fmt::format("{:>9.2f} {:>9.3f}", r.T_K, r.Cp_J_per_mol_K);
-      if (model) line += fmt::format(" {:>9.3f}", r.Cv_J_per_mol_K);
+      if (cv) line += fmt::format(" {:>9.3f}", r.Cv_J_per_mol_K);
       line += fmt::format(" {:>9.3f} {:>10.3f}", r.S_J_per_mol_K, r.H_minus_H298_J_per_mol / 1e3);
       if (model) line += fmt::format(" {:>9.3f}", r.H_minus_H0_J_per_mol / 1e3);
       line +=
           fmt::format(" {:>10.3f} {:>11.3f}", r.G_minus_H298_J_per_mol / 1e3, r.gibbs_function_J_per_mol_K);
+      if (absolute)
+        line += fmt::format(" {:>11.3f} {:>11.3f}", table.H_J_per_mol[i] / 1e3, table.G_J_per_mol[i] / 1e3);
       if (breakdown)
         for (const auto& m : motions)
           line += fmt::format(" {:>{}.3f} {:>{}.3f}", (r.*m.terms).Cp_over_R * R, column_width(m),
@@ -99,6 +108,7 @@ std::string csv_header(const TableWriteOptions& options) {
   if (breakdown)
     for (const auto& m : motions)
       out += fmt::format(",Cp_{0}_J_per_mol_K,S_{0}_J_per_mol_K,H_minus_H0_{0}_kJ_per_mol", m.name);
+  if (options.absolute_columns) out += ",H_kJ_per_mol,G_kJ_per_mol";
   // Tunnelling corrections of transition states; empty for other species (the header comes
   // before the species are known).
   out += ",kappa_wigner,kappa_eckart\n";
@@ -114,8 +124,8 @@ std::string csv_piece(const SpeciesTable& table, const TableWriteOptions& option
       const auto& r = table.rows[i];
       const bool model = table.has_model_columns;
       out += fmt::format("{},{},{:.6f},{},{:.6f},{:.6f},{},{:.6f},{:.6f}", name, r.T_K, r.Cp_J_per_mol_K,
-                         model ? fmt::format("{:.6f}", r.Cv_J_per_mol_K) : "", r.S_J_per_mol_K,
-                         r.H_minus_H298_J_per_mol / 1e3,
+                         model || table.has_cv ? fmt::format("{:.6f}", r.Cv_J_per_mol_K) : "",
+                         r.S_J_per_mol_K, r.H_minus_H298_J_per_mol / 1e3,
                          model ? fmt::format("{:.6f}", r.H_minus_H0_J_per_mol / 1e3) : "",
                          r.G_minus_H298_J_per_mol / 1e3, r.gibbs_function_J_per_mol_K);
       if (breakdown)
@@ -125,6 +135,10 @@ std::string csv_piece(const SpeciesTable& table, const TableWriteOptions& option
                                      t.H_over_RT * R * r.T_K / 1e3)
                        : std::string(",,,");
         }
+      if (options.absolute_columns)
+        out += i < table.H_J_per_mol.size() && i < table.G_J_per_mol.size()
+                   ? fmt::format(",{:.6f},{:.6f}", table.H_J_per_mol[i] / 1e3, table.G_J_per_mol[i] / 1e3)
+                   : std::string(",,");
       {
         const TunnellingPoint* k = i < table.tunnelling.size() ? &table.tunnelling[i] : nullptr;
         out += k ? fmt::format(",{:.8g},{}", k->wigner, k->eckart ? fmt::format("{:.8g}", *k->eckart) : "")
@@ -174,12 +188,16 @@ std::string json_piece(const SpeciesTable& table, const TableWriteOptions& optio
       nlohmann::ordered_json row;
       row["T"] = r.T_K;
       row["Cp"] = r.Cp_J_per_mol_K;
-      if (table.has_model_columns) row["Cv"] = r.Cv_J_per_mol_K;
+      if (table.has_model_columns || table.has_cv) row["Cv"] = r.Cv_J_per_mol_K;
       row["S"] = r.S_J_per_mol_K;
       row["H_minus_H298"] = r.H_minus_H298_J_per_mol / 1e3;
       if (table.has_model_columns) row["H_minus_H0"] = r.H_minus_H0_J_per_mol / 1e3;
       row["G_minus_H298"] = r.G_minus_H298_J_per_mol / 1e3;
       row["minus_G_minus_H298_over_T"] = r.gibbs_function_J_per_mol_K;
+      if (i < table.H_J_per_mol.size() && i < table.G_J_per_mol.size()) {
+        row["H"] = table.H_J_per_mol[i] / 1e3;
+        row["G"] = table.G_J_per_mol[i] / 1e3;
+      }
       if (options.breakdown && table.has_model_columns) {
         for (const auto& m : motions) {
           const MotionTerms& t = r.*m.terms;

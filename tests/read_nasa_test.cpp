@@ -98,9 +98,13 @@ TEST_CASE("malformed blocks name their line") {
         "coefficients");
   std::string bad_t = o2_fixed;
   bad_t.replace(55, 10, "   100.000");
-  CHECK(error_of(bad_t) ==
-        "bad.dat:1:46: error: species 'O2': temperatures T_low 200, T_mid 1000, T_high 100 K are "
-        "not positive and ascending");
+  // An inverted range is read and reported by the sanity checks (nasa_checks_test.cpp).
+  CHECK(error_of(bad_t) == "no error");
+  std::string zero_t = o2_fixed;
+  zero_t.replace(45, 10, "     0.000");
+  CHECK(
+      error_of(zero_t) ==
+      "bad.dat:1:46: error: species 'O2': temperatures T_low 0, T_mid 1000, T_high 3500 K must be positive");
   CHECK(error_of("O2 something without a phase\n 1.0E+00 2.0E+00\n") ==
         "bad.dat:1:45: error: species 'O2': expected the phase (G, L or S) in column 45 followed by T_low, "
         "T_high and "
@@ -123,4 +127,124 @@ TEST_CASE("NASA-9 malformed interval") {
           "n9.dat:3:56: error: species 'CH4': interval 1: T exponents must be -2 -1 0 1 2 3 4, found 5 at "
           "position 7");
   }
+}
+
+namespace {
+
+NasaFile quirk_file(const std::string& name) {
+  return read_nasa_records_file(std::string(VIBTHERM_TEST_DATA) + "/nasa/" + name);
+}
+
+// Cp(298.15 K) and S°(298.15 K, 1 bar) of O2: 29.376 J/(mol K) and 205.152 J/(mol K)
+// (NIST-JANAF 4th ed., Chase 1998, Cp from memory; S from CODATA Key Values, reference.md);
+// the GRI-Mech record gives them to about 0.01.
+void check_o2_values(const NasaPolynomial& p) {
+  const auto v = polynomial_at(p, 298.15);
+  CHECK(v.Cp_J_per_mol_K() == doctest::Approx(29.376).epsilon(0.001));
+  CHECK(v.S_J_per_mol_K() == doctest::Approx(205.152).epsilon(0.0005));
+}
+
+}  // namespace
+
+TEST_CASE("each published quirk file reads to the plain record's coefficients") {
+  for (const char* name : {"line4_fifth_number.dat", "column79_digit.dat", "exponent_forms.dat",
+                           "keyword_therm.dat", "keyword_therm_lower.dat", "keyword_therm_all.dat",
+                           "mechanism.dat", "ampersand_continuation.dat", "fifth_element_field.dat"}) {
+    CAPTURE(name);
+    const NasaFile f = quirk_file(name);
+    CHECK(f.errors.empty());
+    CHECK(f.warnings.empty());
+    REQUIRE(!f.species.empty());
+    check_o2(f.species[0], 1000.0);
+    check_o2_values(f.species[0]);
+    CHECK(std::get<Nasa7>(f.species[0]).composition.size() == 1);
+    CHECK(std::get<Nasa7>(f.species[0]).composition[0].symbol == "O");
+    CHECK(std::get<Nasa7>(f.species[0]).composition[0].count == 2.0);
+  }
+  SUBCASE("mechanism file: the thermo section only, both species") {
+    const NasaFile f = quirk_file("mechanism.dat");
+    REQUIRE(f.species.size() == 2);
+    CHECK(polynomial_name(f.species[1]) == "AR");
+  }
+  SUBCASE("filled fifth element field") {
+    const NasaFile f = quirk_file("fifth_element_field.dat");
+    REQUIRE(f.species.size() == 2);
+    const auto& ar = std::get<Nasa7>(f.species[1]);
+    REQUIRE(ar.composition.size() == 1);
+    CHECK(ar.composition[0].symbol == "AR");
+    CHECK(ar.T_mid_K == 1000.0);
+    // Ar S°(298.15 K) 154.846 J/(mol K) (CODATA Key Values, reference.md); the record gives 154.73.
+    CHECK(ar.at(298.15).S_J_per_mol_K() == doctest::Approx(154.846).epsilon(0.001));
+    // Cp = 5/2 R exactly for a monatomic gas (common practice): 20.786 J/(mol K) (NIST-JANAF).
+    CHECK(ar.at(2000).Cp_J_per_mol_K() == doctest::Approx(20.786).epsilon(1e-4));
+  }
+}
+
+TEST_CASE("single-range species and a default T_mid outside their range") {
+  const NasaFile f = quirk_file("single_range.dat");
+  REQUIRE(f.species.size() == 2);
+  CHECK(f.errors.empty());
+  const auto& cold = std::get<Nasa7>(f.species[0]);
+  const auto& hot = std::get<Nasa7>(f.species[1]);
+  CHECK(cold.T_mid_K == 800.0);  // clamped to the range's end
+  CHECK(hot.T_mid_K == 1500.0);
+  CHECK(cold.at(500).Cp_over_R == 2.5);
+  CHECK(hot.at(3000).Cp_over_R == 2.5);
+}
+
+TEST_CASE("NASA-9 published layout evaluates as the same coefficients in our layout") {
+  const NasaFile pub = quirk_file("nasa9_published.dat");
+  const NasaFile ours = quirk_file("nasa9_ours.dat");
+  const NasaFile db = quirk_file("nasa_database_layout.dat");
+  REQUIRE(pub.species.size() == 1);
+  REQUIRE(ours.species.size() == 1);
+  REQUIRE(db.species.size() == 1);
+  CHECK(db.warnings.size() == 1);  // the reactant with no temperature intervals
+  const auto& a = std::get<Nasa9>(pub.species[0]);
+  REQUIRE(a.ranges.size() == 2);
+  CHECK(a.ranges[1].T_low_K == 1000.0);
+  CHECK(a.ranges[1].T_high_K == 6000.0);
+  CHECK(a.H298_minus_H0_J_per_mol == 8680.104);
+  for (double T : {200.0, 298.15, 700.0, 1000.0, 2500.0, 6000.0}) {
+    const auto x = polynomial_at(pub.species[0], T), y = polynomial_at(ours.species[0], T),
+               z = polynomial_at(db.species[0], T);
+    CHECK(x.Cp_over_R == y.Cp_over_R);
+    CHECK(x.H_over_RT == y.H_over_RT);
+    CHECK(x.S_over_R == y.S_over_R);
+    CHECK(x.S_over_R == z.S_over_R);
+  }
+  check_o2_values(pub.species[0]);
+}
+
+TEST_CASE("a bad record is reported and the others are read; duplicates keep the first") {
+  const NasaFile mix = read_nasa_records_file(std::string(VIBTHERM_TEST_DATA) + "/nasa_quirk_mix.dat");
+  REQUIRE(mix.errors.size() == 1);
+  CHECK(std::string(mix.errors[0].what()).find("species 'BAD-O2'") != std::string::npos);
+  CHECK(mix.errors[0].where().line == 19);
+  REQUIRE(mix.species.size() == 5);
+  for (const char* n : {"O2-A", "O2-B", "AR", "O2-C", "O2-D"}) {
+    bool found = false;
+    for (const auto& p : mix.species) found = found || polynomial_name(p) == n;
+    CHECK_MESSAGE(found, n);
+  }
+  std::string twice = o2_fixed;
+  std::string other = o2_fixed;
+  other.replace(46 + 2, 3, "300");  // T_low 300 K in the second O2
+  const NasaFile d = read_nasa_records(twice + other + other, "dup.dat");
+  REQUIRE(d.species.size() == 1);
+  CHECK(std::get<Nasa7>(d.species[0]).T_low_K == 200.0);
+  REQUIRE(d.warnings.size() == 1);
+  CHECK(d.warnings[0] ==
+        "dup.dat:5: species 'O2' is defined more than once (line 1, again at lines 5, 9): the first record "
+        "is used");
+  CHECK_THROWS_AS(read_nasa(o2_fixed + "X  bad\n 1.0\n", "x.dat"), InputError);
+}
+
+TEST_CASE("field parsing: exponents without sign, D and lowercase") {
+  const std::string sign_less =
+      "O2                TPIS89O   2               G   200.000  3500.000  1000.000    1\n"
+      " 3.28253784e 00 1.48308754e-03-7.57966669d-07 2.09470555D-10-2.16717794E-14    2\n"
+      "-1.08845772e 03 5.45323129E 00 3.78245636E+00-2.99673416E-03 9.84730201E-06    3\n"
+      "-9.68129509E-09 3.24372837E-12-1.06394356E+03 3.65767573E+00 0.00000000E 00    4\n";
+  check_o2(read_nasa(sign_less, "s.dat").at(0), 1000.0);
 }

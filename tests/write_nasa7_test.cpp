@@ -46,7 +46,7 @@ TEST_CASE("fixed-column conformance") {
   const auto lines = lines_of(write_nasa7({n, o2_record()}, Nasa7WriteOptions{true, {"header"}}));
   REQUIRE(lines.size() == 1 + 2 + 1 + 4 + 4 + 1);
   CHECK(lines[0] == "! header");
-  CHECK(lines[1] == "THERMO");
+  CHECK(lines[1] == "THERMO ALL");  // converters read the default-temperature line only after THERMO ALL
   CHECK(lines[2] == "   200.000  1350.000  4000.000");  // widest range, most common T_mid (first on a tie)
   CHECK(lines[3] == "! a note");
   CHECK(lines.back() == "END");

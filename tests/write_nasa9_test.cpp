@@ -73,11 +73,14 @@ TEST_CASE("NASA-9 record layout (NASA/TP-2002-211556, shared/reference.md)") {
 }
 
 TEST_CASE("NASA-9 text reads back to the same numbers") {
-  const auto back = read_nasa(write_nasa9({sample(), sample()}), "n9");
+  // Two records (a repeated name would be dropped as a duplicate: the first record wins).
+  Nasa9 second = sample();
+  second.name = "CH4-copy";
+  const auto back = read_nasa(write_nasa9({sample(), second}), "n9");
   REQUIRE(back.size() == 2);
   const auto& n = std::get<Nasa9>(back[1]);
   const Nasa9 s = sample();
-  CHECK(n.name == "CH4");
+  CHECK(n.name == "CH4-copy");
   CHECK(n.comment == "test record");
   CHECK(n.molar_mass_g_per_mol == s.molar_mass_g_per_mol);
   CHECK(n.enthalpy_of_formation_J_per_mol == s.enthalpy_of_formation_J_per_mol);

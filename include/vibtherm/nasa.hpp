@@ -93,9 +93,12 @@ bool polynomial_in_range(const NasaPolynomial& polynomial, double T_K);
 double polynomial_T_min_K(const NasaPolynomial& polynomial);
 double polynomial_T_max_K(const NasaPolynomial& polynomial);
 
+// Gas phase: NASA-7 phase G, NASA-9 phase 0.
+bool polynomial_is_gas(const NasaPolynomial& polynomial);
+
 // The table row of a polynomial at T: Cp, S, H − H(298.15 K), G − H(298.15 K) and
-// −[G − H(298.15 K)]/T from the polynomial; the model-only fields (Cv, H − H0, motions)
-// stay zero, so writers show them as unknown.
+// −[G − H(298.15 K)]/T from the polynomial, and for a gas Cv = Cp − R (ideal gas, common
+// practice); the model-only fields (H − H0, motions) stay zero, so writers show them as unknown.
 ThermoPoint polynomial_table_row(const NasaPolynomial& polynomial, double T_K);
 
 }  // namespace vibtherm

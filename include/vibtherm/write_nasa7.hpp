@@ -1,5 +1,5 @@
 // NASA-7 writer: the fixed-column four-line records of NASA SP-273 / TM-4513, optionally
-// wrapped in THERMO ... END.
+// wrapped in THERMO ALL ... END.
 //
 // What does not fit the format is an InputError, never truncated: a name longer than 18
 // characters or containing blanks, a note longer than 6 characters, more than four
@@ -15,7 +15,7 @@
 namespace vibtherm {
 
 struct Nasa7WriteOptions {
-  bool thermo_wrapper = true;                // THERMO, default-temperature line, ..., END
+  bool thermo_wrapper = true;                // THERMO ALL, default-temperature line, ..., END
   std::vector<std::string> header_comments;  // '!' lines at the top of the file
 };
 

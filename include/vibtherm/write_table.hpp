@@ -21,10 +21,14 @@ struct SpeciesTable {
   std::vector<std::string> conformer_files;      // ensembles: the conformers, in input order
   std::vector<std::vector<double>> populations;  // ensembles: per row, one population per conformer  //
                                                  // transition states: κ(T) per row, else empty
+  bool has_cv = false;  // Cv known without the model columns (a gas polynomial: Cp − R)
+  // Absolute H and G = H − TS per row (J/mol) when H(298.15 K) is known; else empty.
+  std::vector<double> H_J_per_mol{}, G_J_per_mol{};
 };
 
 struct TableWriteOptions {
-  bool breakdown = false;  // per-motion Cp, S, H−H0 (translation, rotation, vibration, electronic)
+  bool breakdown = false;         // per-motion Cp, S, H−H0 (translation, rotation, vibration, electronic)
+  bool absolute_columns = false;  // CSV header: H and G columns (filled where a table has them)
 };
 
 std::string table_text(const std::vector<SpeciesTable>& tables, const TableWriteOptions& options = {});

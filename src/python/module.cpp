@@ -173,7 +173,8 @@ PYBIND11_MODULE(vibtherm, m) {
           [](const Polynomial& p, const py::object& temperatures) {
             return polynomial_table_dict(p.value, python::temperatures(temperatures));
           },
-          py::arg("temperatures"), "Cp, S, H_minus_H298, G_minus_H298, minus_G_minus_H298_over_T at each T")
+          py::arg("temperatures"),
+          "Cp, Cv (gas), S, H_minus_H298, G_minus_H298, minus_G_minus_H298_over_T, H, G at each T")
       .def("__repr__", [](const Polynomial& p) {
         return fmt::format("<vibtherm.NasaPolynomial '{}' ({}, {:g}-{:g} K)>", polynomial_name(p.value),
                            std::holds_alternative<Nasa7>(p.value) ? "NASA-7" : "NASA-9",

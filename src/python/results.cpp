@@ -77,7 +77,16 @@ py::dict table_dict(const PreparedSpecies& prepared, const std::vector<double>& 
 py::dict polynomial_table_dict(const NasaPolynomial& polynomial, const std::vector<double>& temperatures_K) {
   std::vector<ThermoPoint> rows;
   for (double T : temperatures_K) rows.push_back(polynomial_table_row(polynomial, T));
-  return rows_dict(rows, false);
+  py::dict d = rows_dict(rows, false);
+  // As `eval`: Cv = Cp − R for a gas, and the polynomial's absolute H and G = H − TS.
+  if (polynomial_is_gas(polynomial))
+    d["Cv"] = column(rows, [](const ThermoPoint& r) { return r.Cv_J_per_mol_K; });
+  d["H"] = column(rows,
+                  [&](const ThermoPoint& r) { return polynomial_at(polynomial, r.T_K).H_J_per_mol() / 1e3; });
+  d["G"] = column(rows, [&](const ThermoPoint& r) {
+    return (polynomial_at(polynomial, r.T_K).H_J_per_mol() - r.T_K * r.S_J_per_mol_K) / 1e3;
+  });
+  return d;
 }
 
 py::dict modes_dict(const ModesReport& r) {
