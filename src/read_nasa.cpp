@@ -3,11 +3,13 @@
 #include <fmt/format.h>
 
 #include <algorithm>
+#include <cctype>
 #include <fstream>
 #include <sstream>
 #include <unordered_map>
 
 #include "nasa_text.hpp"
+#include "vibtherm/species_format.hpp"
 
 namespace vibtherm {
 
@@ -214,10 +216,67 @@ class Reader {
   }
 };
 
+// The first line that is neither blank nor a '#' or '!' comment (1-based; 1 if none).
+int first_content_line(const std::string& text) {
+  std::istringstream in(text);
+  std::string s;
+  for (int n = 1; std::getline(in, s); ++n) {
+    const std::string_view t = trim(s);
+    if (!t.empty() && t[0] != '#' && t[0] != '!') return n;
+  }
+  return 1;
+}
+
+// Thermo text has a THERMO keyword, a number with an exponent (every coefficient field has
+// one) or a line of three or more numbers (a record's temperatures).
+bool looks_like_thermo_text(const std::string& text) {
+  std::istringstream in(text);
+  std::string s;
+  while (std::getline(in, s)) {
+    if (keyword_of(s) == Keyword::thermo) return true;
+    for (std::size_t k = 1; k + 1 < s.size(); ++k) {
+      const char e = static_cast<char>(s[k] | 0x20);
+      if ((e == 'e' || e == 'd') && std::isdigit(static_cast<unsigned char>(s[k - 1])) &&
+          (std::isdigit(static_cast<unsigned char>(s[k + 1])) || s[k + 1] == '+' || s[k + 1] == '-'))
+        return true;
+    }
+    std::istringstream words(s);
+    std::string w;
+    int numbers = 0;
+    while (words >> w)
+      if (to_number(w)) ++numbers;
+    if (numbers >= 3) return true;
+  }
+  return false;
+}
+
+// A text of which no record could be read is often not thermo text at all: say so in one
+// line instead of reporting its first line as a broken record. A species file is named as
+// one (species_format.hpp); other text without any sign of NASA records is refused as such.
+void refuse_if_not_thermo_text(const std::string& text, const std::string& file_name) {
+  const SourceLocation where{file_name, first_content_line(text), 1};
+  std::string species_kind;
+  try {
+    species_kind = std::string(species_format_name(detect_species_format(text, file_name)));
+  } catch (const InputError&) {
+    // Not a species file (or recognised as NASA text): decided below.
+  }
+  if (!species_kind.empty())
+    fail(where, fmt::format("this is a species file ({}), not a NASA polynomial file: 'vibtherm eval' reads "
+                            "NASA-7/NASA-9 thermo text; species files go to table, fit or report",
+                            species_kind));
+  if (!looks_like_thermo_text(text))
+    fail(where,
+         "not a NASA polynomial file: no THERMO keyword, no number with an exponent (such as "
+         "3.29812431E+00) and no line of numbers, expected NASA-7 or NASA-9 thermo text");
+}
+
 }  // namespace
 
 NasaFile read_nasa_records(const std::string& text, const std::string& file_name) {
-  return Reader(text, file_name).finish();
+  NasaFile f = Reader(text, file_name).finish();
+  if (f.species.empty() && !f.errors.empty()) refuse_if_not_thermo_text(text, file_name);
+  return f;
 }
 
 NasaFile read_nasa_records_file(const std::string& path) {

@@ -114,6 +114,22 @@ TEST_CASE("malformed blocks name their line") {
         "bad.dat:1:1: error: species record 'O2' ends after its first line (expected its coefficient lines)");
 }
 
+TEST_CASE("a file of which no record is read: a species file or other text is named as such") {
+  // A YAML species file under a thermo-file name; YAML detection: species_format.hpp.
+  CHECK_THROWS_WITH_AS(
+      read_nasa_records("# water\nname: water\natoms: []\n", "w.dat"),
+      doctest::Contains("w.dat:2:1: error: this is a species file (YAML), not a NASA polynomial file"),
+      InputError);
+  CHECK_THROWS_WITH_AS(read_nasa_records("{\"schema_name\": \"qcschema_output\"}\n", "w.json"),
+                       doctest::Contains("w.json:1:1: error: this is a species file (QCSchema JSON)"),
+                       InputError);
+  CHECK_THROWS_WITH_AS(read_nasa_records("some notes\nabout thermo\n", "n.txt"),
+                       doctest::Contains("n.txt:1:1: error: not a NASA polynomial file"), InputError);
+  // A file with one good record and one bad one stays a NASA file with a bad record.
+  const NasaFile f = read_nasa_records(std::string(o2_fixed) + "name: water\n", "mix.dat");
+  CHECK(f.species.size() == 1);
+}
+
 TEST_CASE("NASA-9 malformed interval") {
   const std::string text =
       "CH4               x\n"

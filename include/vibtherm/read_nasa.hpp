@@ -39,8 +39,12 @@ struct NasaFile {
   std::vector<std::string> warnings;    // "FILE:LINE: ..." (duplicate names, skipped species)
 };
 
-// `file_name` is used for locations only. Never throws for a bad record (see `errors`); a
-// text without any record and without errors is an InputError.
+// `file_name` is used for locations and, when no record could be read, for telling a
+// species file by its extension. Never throws for a bad record (see `errors`). InputError
+// (one line) for a text without any record and without errors, for a species file (YAML,
+// XYZ, QCSchema, Molden: "this is a species file ..., not a NASA polynomial file") and for
+// text with neither a THERMO keyword nor any number with an exponent, of which nothing
+// could be read.
 NasaFile read_nasa_records(const std::string& text, const std::string& file_name);
 NasaFile read_nasa_records_file(const std::string& path);
 

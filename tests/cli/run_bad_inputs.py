@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
 """Runs `vibtherm table` on every malformed species input in tests/bad/ (`vibtherm eval`
-on the malformed NASA polynomial files, *.dat) and on a few bad option values, and checks the promise of design.md section 7: exit status 2, exactly one error
+on the malformed NASA polynomial files, *.dat, and on eval_*.* of any kind) and on a few bad option values, and checks the promise of design.md section 7: exit status 2, exactly one error
 line on stderr (the one in NAME.expected), and no output file.
 
 Usage: run_bad_inputs.py VIBTHERM_EXECUTABLE [TESTS_BAD_DIR]
@@ -79,7 +79,8 @@ def main():
             failures.append(f"{path.name}: no {expected_path.name}")
             continue
         expected = expected_path.read_text(encoding="utf-8").strip()
-        subcommand = "eval" if path.suffix == ".dat" else "table"
+        # eval_NAME.*: a file of another kind given to eval (a species file, say).
+        subcommand = "eval" if path.suffix == ".dat" or path.name.startswith("eval_") else "table"
         args = [path.name]
         if path.name.startswith("method_"):  # a method file, applied to a species with energies
             args = ["../data/water-energies-no-method.yaml", "--method", path.name]
