@@ -173,7 +173,8 @@ class Reader {
       if (starts_with_number(s)) continue;
       // A record's first line is followed by numbers (NASA-7 coefficients, the NASA-9
       // interval count) or announces an '&' continuation.
-      const auto t = trim(strip_comment(s));
+      const std::string code = strip_comment(s);
+      const auto t = trim(code);
       Cursor look{lines_, file_, cur.i + 1};
       if ((!t.empty() && t.back() == '&') || (look.next_content() && starts_with_number(lines_[look.i].text)))
         return;

@@ -10,6 +10,7 @@
 #include <iterator>
 #include <set>
 #include <sstream>
+#include <string_view>
 
 #include "vibtherm/species_builder.hpp"
 #include "vibtherm/spelling.hpp"
@@ -38,11 +39,29 @@ class DocumentCounter : public YAML::EventHandler {
   void OnMapEnd() override {}
 };
 
+// True when the text may hold more than one YAML document or trip the ',' fault above.
+// A YAML stream holds a second document only after a line starting with the marker "---"
+// or "..." in column 1 (YAML 1.2, section 9.2), so a text without such a line, and without
+// a line starting with ',', holds one document and is parsed once. This scan costs a tiny
+// fraction of a parse; the counting pass below runs only when it finds a marker.
+bool may_hold_several_documents(const std::string& text) {
+  for (std::size_t start = 0; start < text.size();) {
+    const std::size_t end = std::min(text.find('\n', start), text.size());
+    const std::string_view line(text.data() + start, end - start);
+    if (line.starts_with("---") || line.starts_with("...")) return true;
+    const std::size_t first = line.find_first_not_of(" \t");
+    if (first != std::string_view::npos && line[first] == ',') return true;
+    start = end + 1;
+  }
+  return false;
+}
+
 }  // namespace
 
 YAML::Node load_single_yaml_document(const std::string& text, const std::string& file_name,
                                      const std::string& expected, const std::string& one_per_file) {
   try {
+    if (!may_hold_several_documents(text)) return YAML::Load(text);
     std::istringstream stream(text);
     YAML::Parser parser(stream);
     DocumentCounter counter;
