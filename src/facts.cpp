@@ -45,7 +45,10 @@ SpeciesFacts describe_species(const PreparedSpecies& p) {
   f.rotational_constants_cm1 = p.rotor.rotational_constants_cm1;
   f.rotational_constants_GHz = p.rotor.rotational_constants_GHz;
   f.rotational_temperatures_K = p.rotor.rotational_temperatures_K;
-  f.symmetry_number = p.species.symmetry_number;
+  f.symmetry_number = p.species.symmetry_number.value_or(1);
+  if (p.point_group) f.point_group = p.point_group->label;
+  f.chiral = p.point_group && p.point_group->chiral;
+  f.racemic = p.racemic;
   f.atom_count = atom_count(p.species);
   f.expected_modes = expected_vibration_count(p.species, p.rotor.type);
   f.given_modes = static_cast<int>(p.species.frequencies_cm1.size());

@@ -44,7 +44,7 @@ void check_species(const Species& s) {
     for (double h : *s.hessian_J_per_m2)
       if (!std::isfinite(h)) fail(at, who + "the Hessian holds a value that is not finite");
   if (s.symmetry_number > max_symmetry_number)
-    fail(at, fmt::format("{}symmetry number is {}, expected 1 to {}", who, s.symmetry_number,
+    fail(at, fmt::format("{}symmetry number is {}, expected 1 to {}", who, *s.symmetry_number,
                          max_symmetry_number));
   for (const ElectronicLevel& level : s.electronic_levels) {
     check_range(level.energy_cm1, 0.0, max_electronic_energy_cm1, who + "electronic level energy", "cm^-1",

@@ -1,5 +1,7 @@
 #include "vibtherm/point_group.hpp"
 
+#include <fmt/format.h>
+
 #include <Eigen/Geometry>
 #include <Eigen/SVD>
 #include <algorithm>
@@ -261,6 +263,40 @@ PointGroup detect_point_group(const std::vector<Atom>& atoms, double tolerance_a
       static_cast<int>(std::count_if(ops.begin(), ops.end(), [](const Operation& op) { return op.det > 0; }));
   g.chiral = g.order == g.symmetry_number;
   return g;
+}
+
+SymmetryChoice choose_symmetry_number(const Species& species, double tolerance_angstrom) {
+  SymmetryChoice out;
+  const std::optional<int>& given = species.symmetry_number;
+  out.symmetry_number = given.value_or(1);
+  if (species.phase == Phase::adsorbate) return out;
+  if (species.atoms.empty()) {
+    if (!given) {
+      const char* key = species.key_locations.count("moments_of_inertia")     ? "moments_of_inertia"
+                        : species.key_locations.count("rotational_constants") ? "rotational_constants"
+                                                                              : "mass";
+      fail(key_location(species, key),
+           fmt::format("species '{}' has '{}' but no 'symmetry_number', expected one (without 'atoms' it "
+                       "cannot be detected)",
+                       species.name, key));
+    }
+    return out;
+  }
+  const PointGroup g = detect_point_group(species.atoms, tolerance_angstrom);
+  out.point_group = g;
+  const std::string label = point_group_display(g.label);
+  if (!given) {
+    out.symmetry_number = g.symmetry_number;
+    out.notes.push_back(
+        fmt::format("symmetry number {} from the point group {} of the geometry (tolerance {:g} A)",
+                    g.symmetry_number, label, tolerance_angstrom));
+  } else if (*given != g.symmetry_number) {
+    out.warnings.push_back(
+        fmt::format("symmetry_number {} given, but the geometry's point group {} has {} "
+                    "(tolerance {:g} A); the given {} is used",
+                    *given, label, g.symmetry_number, tolerance_angstrom, *given));
+  }
+  return out;
 }
 
 std::string point_group_display(const std::string& label) {

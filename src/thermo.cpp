@@ -176,6 +176,28 @@ void replace_torsions(PreparedSpecies& p) {
   p.vibrations_cm1 = std::move(kept);
 }
 
+// The symmetry number used and the point group (point_group.hpp); a racemic mixture when
+// asked for and the geometry is chiral.
+void choose_symmetry(PreparedSpecies& p) {
+  SymmetryChoice choice = choose_symmetry_number(p.species, p.options.symmetry_tolerance_angstrom);
+  p.species.symmetry_number = choice.symmetry_number;
+  p.point_group = choice.point_group;
+  p.notes.insert(p.notes.end(), choice.notes.begin(), choice.notes.end());
+  p.warnings.insert(p.warnings.end(), choice.warnings.begin(), choice.warnings.end());
+  if (!p.options.racemic || !p.is_gas) return;
+  if (!p.point_group)
+    p.warnings.push_back("--racemic ignored: without 'atoms' the chirality is unknown");
+  else if (p.point_group->chiral) {
+    p.racemic = true;
+    p.notes.push_back(
+        fmt::format("racemic mixture (--racemic): the point group {} is chiral, S + R ln 2 "
+                    "and G - RT ln 2 for the two enantiomers",
+                    point_group_display(p.point_group->label)));
+  } else
+    p.notes.push_back(fmt::format("--racemic changes nothing: the point group {} is not chiral",
+                                  point_group_display(p.point_group->label)));
+}
+
 // Chooses the low-frequency treatment (option, else the species key, else harmonic) and
 // lists the modes it or a separate enthalpy scale factor changes.
 void plan_low_frequency(PreparedSpecies& p) {
@@ -200,7 +222,7 @@ class Evaluator {
       translation_ = p.options.standard_state == StandardState::molar
                          ? translation_law_concentration(p.rotor.mass_amu, 1000.0)
                          : translation_law(p.rotor.mass_amu, p.options.pressure_Pa);
-      rotation_ = rigid_rotor_law(p.rotor.rotational_temperatures_K, p.species.symmetry_number);
+      rotation_ = rigid_rotor_law(p.rotor.rotational_temperatures_K, p.species.symmetry_number.value_or(1));
     }
     theta_K_.reserve(p.vibrations_cm1.size());
     for (double v : p.vibrations_cm1) theta_K_.push_back(characteristic_temperature_K(v));
@@ -230,6 +252,8 @@ class Evaluator {
       const double ln_T = std::log(T_K);
       point.translation = translation_.at(ln_T);
       point.rotation = rotation_.at(ln_T);
+      // Two optical isomers count like a halved symmetry number: q_rot × 2 (common practice).
+      if (p_.racemic) point.rotation.ln_q += std::log(2.0), point.rotation.S_over_R += std::log(2.0);
     }
     point.vibration = harmonic_oscillators_terms(theta_K_, T_K);
     // The one hook of the low-frequency module: its correction to the harmonic sum.
@@ -360,6 +384,7 @@ void check_model_options(const ModelOptions& options) {
                         "Pa");
   limits::check_range(options.imaginary_as_real_below_cm1, 0.0, limits::max_wavenumber_cm1,
                       "--imaginary-as-real-below", "cm^-1");
+  limits::check_range(options.symmetry_tolerance_angstrom, 1e-6, 0.25, "--symmetry-tolerance", "angstrom");
 }
 
 PreparedSpecies prepare_species(const Species& species, const ModelOptions& options) {
@@ -371,10 +396,11 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
   p.notes = species.reader_notes;
   check_model_options(options);
   limits::check_species(species);
-  if (species.symmetry_number < 1)
+  if (species.symmetry_number && *species.symmetry_number < 1)
     fail(key_location(species, "symmetry_number"),
-         fmt::format("symmetry number must be a positive integer, got {}", species.symmetry_number));
+         fmt::format("symmetry number must be a positive integer, got {}", *species.symmetry_number));
   p.rotor = analyse_rotor(species, options.linear_tolerance_amu_A2);
+  choose_symmetry(p);
   if (species.hessian_J_per_m2) {
     frequencies_from_hessian(p);
     for (double v : p.species.frequencies_cm1)

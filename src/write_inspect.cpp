@@ -6,6 +6,7 @@
 #include <nlohmann/json.hpp>
 
 #include "vibtherm/markup.hpp"
+#include "vibtherm/point_group.hpp"
 
 namespace vibtherm {
 
@@ -54,7 +55,10 @@ std::string inspect_text(const std::vector<SpeciesFacts>& all) {
       line("rot. constants", numbers(f.rotational_constants_cm1, "{:.5f}") + " cm^-1");
       line("", numbers(f.rotational_constants_GHz, "{:.4f}") + " GHz");
       line("rot. temperatures", numbers(f.rotational_temperatures_K, "{:.4f}") + " K");
-      line("symmetry number", std::to_string(f.symmetry_number));
+      line("point group", f.point_group.empty()
+                              ? std::string("- (no geometry)")
+                              : point_group_display(f.point_group) + (f.chiral ? " (chiral)" : ""));
+      line("symmetry number", std::to_string(f.symmetry_number) + (f.racemic ? " (racemic: + R ln 2)" : ""));
     }
     line("ground degeneracy", std::to_string(f.ground_degeneracy));
     line("modes", fmt::format("{} given, {} expected for N = {}, {} imaginary", f.given_modes,
@@ -92,7 +96,7 @@ std::string inspect_csv(const std::vector<SpeciesFacts>& all) {
   std::string out =
       "species,formula,phase,rotor,mass_amu,molar_mass_g_per_mol,Ia_amu_A2,Ib_amu_A2,Ic_amu_A2,symmetry_"
       "number,"
-      "atoms,modes_given,modes_expected,imaginary,zpe_kJ_per_mol\n";
+      "atoms,modes_given,modes_expected,imaginary,zpe_kJ_per_mol,point_group\n";
   for (const auto& f : all) {
     // An adsorbate has no rotor: its rotor and moment fields are empty.
     const bool rotates = f.phase != "adsorbate";
@@ -100,10 +104,10 @@ std::string inspect_csv(const std::vector<SpeciesFacts>& all) {
     const std::string moments = rotates ? fmt::format("{:.6f},{:.6f},{:.6f}", f.moments_amu_A2[0],
                                                       f.moments_amu_A2[1], f.moments_amu_A2[2])
                                         : std::string(",,");
-    out += fmt::format("{},{},{},{},{:.6f},{:.4f},{},{},{},{},{},{},{:.6f}\n", csv_field(f.name),
+    out += fmt::format("{},{},{},{},{:.6f},{:.4f},{},{},{},{},{},{},{:.6f},{}\n", csv_field(f.name),
                        csv_field(f.formula), f.phase, rotor, f.mass_amu, f.molar_mass_g_per_mol, moments,
                        f.symmetry_number, f.atom_count, f.given_modes, f.expected_modes, f.imaginary_modes,
-                       f.zero_point_energy_J_per_mol / 1e3);
+                       f.zero_point_energy_J_per_mol / 1e3, f.point_group);
   }
   return out;
 }
@@ -120,6 +124,10 @@ std::string inspect_json(const std::vector<SpeciesFacts>& all) {
     s["mass"] = f.mass_amu;
     if (rotates) s["moments_of_inertia"] = f.moments_amu_A2;
     s["symmetry_number"] = f.symmetry_number;
+    s["point_group"] =
+        f.point_group.empty() ? nlohmann::ordered_json() : nlohmann::ordered_json(f.point_group);
+    if (!f.point_group.empty()) s["chiral"] = f.chiral;
+    if (f.racemic) s["racemic"] = true;
     s["frequencies"] = f.frequencies_cm1;
     s["zpe"] = f.zero_point_energy_J_per_mol / 1e3;
     if (f.enthalpy_of_formation_J_per_mol) {

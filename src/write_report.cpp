@@ -7,6 +7,7 @@
 #include <numeric>
 
 #include "vibtherm/markup.hpp"
+#include "vibtherm/point_group.hpp"
 #include "vibtherm/write_modes_svg.hpp"
 #include "vibtherm/write_nasa7.hpp"
 #include "vibtherm/write_thermo_svg.hpp"
@@ -154,7 +155,11 @@ void facts_list(std::string& out, const ReportSpecies& s) {
         fact(out, "rotational constants",
              fmt::format("{:.5g} cm⁻¹", fmt::join(f.rotational_constants_cm1, ", ")));
     }
-    fact(out, "symmetry number σ", fmt::format("{}", f.symmetry_number));
+    fact(out, "point group",
+         f.point_group.empty() ? std::string("— (no geometry)")
+                               : point_group_display(f.point_group) + (f.chiral ? " (chiral)" : ""));
+    fact(out, "symmetry number σ",
+         fmt::format("{}{}", f.symmetry_number, f.racemic ? " (racemic: + R ln 2)" : ""));
   }
   fact(out, "ground-level degeneracy", fmt::format("{}", f.ground_degeneracy));
   fact(

@@ -166,7 +166,7 @@ double straightforward(const PreparedSpecies& p, double T, int which) {
     total += p.options.standard_state == StandardState::molar
                  ? translation_terms_concentration(p.rotor.mass_amu, T, 1000.0)
                  : translation_terms(p.rotor.mass_amu, T, p.options.pressure_Pa);
-    total += rigid_rotor_terms(p.rotor.rotational_temperatures_K, p.species.symmetry_number, T);
+    total += rigid_rotor_terms(p.rotor.rotational_temperatures_K, *p.species.symmetry_number, T);
   }
   for (double v : p.vibrations_cm1) total += harmonic_oscillator_terms(v, T);
   total += electronic_terms(p.species.electronic_levels, T);

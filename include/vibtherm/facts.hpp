@@ -29,7 +29,10 @@ struct SpeciesFacts {
   std::vector<double> rotational_constants_cm1;
   std::vector<double> rotational_constants_GHz;
   std::vector<double> rotational_temperatures_K;
-  int symmetry_number = 1;
+  int symmetry_number = 1;  // the one used
+  std::string point_group;  // Schoenflies label (point_group.hpp); empty without a geometry
+  bool chiral = false;
+  bool racemic = false;  // R ln 2 added for the two enantiomers
   int atom_count = 0;
   int expected_modes = 0;
   int given_modes = 0;

@@ -2,6 +2,7 @@
 // (the external symmetry number σ) and chirality, found within a distance tolerance.
 #pragma once
 
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -28,6 +29,17 @@ struct PointGroup {
 // the group they form. Equivalent atoms share element and mass number. Needs at least one atom.
 PointGroup detect_point_group(const std::vector<Atom>& atoms,
                               double tolerance_angstrom = default_symmetry_tolerance_angstrom);
+
+// The symmetry number a species is computed with: the given one (a detected σ that disagrees
+// is a warning), else the detected one (said in a note). Rotational-constant input has no
+// geometry, so there `symmetry_number` is required (InputError). An adsorbate does not
+// rotate: no detection, σ stays as given (or 1).
+struct SymmetryChoice {
+  std::optional<PointGroup> point_group;  // absent without a geometry and for adsorbates
+  int symmetry_number = 1;
+  std::vector<std::string> notes, warnings;
+};
+SymmetryChoice choose_symmetry_number(const Species& species, double tolerance_angstrom);
 
 // "C∞v"-style label for people (text and HTML): subscripts stay plain, ∞ for "inf".
 std::string point_group_display(const std::string& label);

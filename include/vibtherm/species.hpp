@@ -88,7 +88,9 @@ struct Species {
   // (energy per molecule). prepare_species (thermo.hpp) turns it into frequencies once the
   // phase and rotor type are known, with the atoms' (isotope) masses.
   std::optional<std::vector<double>> hessian_J_per_m2;
-  int symmetry_number = 1;
+  // External symmetry number as given; absent: detected from `atoms` (point_group.hpp). After
+  // prepare_species it holds the one used.
+  std::optional<int> symmetry_number;
   std::vector<ElectronicLevel> electronic_levels{{0.0, 1}};
   std::optional<double> enthalpy_of_formation_J_per_mol;  // ΔfH°(298.15 K)
   // Total electronic energy at the equilibrium geometry (input key `electronic_energy`,

@@ -13,6 +13,7 @@
 #include "vibtherm/hindered_rotor.hpp"
 #include "vibtherm/low_frequency.hpp"
 #include "vibtherm/partition.hpp"
+#include "vibtherm/point_group.hpp"
 #include "vibtherm/scale_factors.hpp"
 #include "vibtherm/species.hpp"
 #include "vibtherm/tunnelling.hpp"
@@ -32,6 +33,8 @@ struct ModelOptions {
   double imaginary_as_real_below_cm1 = 0.0;  // |ν̃| below this: treated as real, with a warning
   bool mode_count_mismatch_is_warning = false;
   double linear_tolerance_amu_A2 = default_linear_tolerance_amu_A2;
+  double symmetry_tolerance_angstrom = default_symmetry_tolerance_angstrom;  // point-group detection
+  bool racemic = false;  // a chiral species as a racemic mixture: S + R ln 2 (optical isomers)
 };
 
 struct ConformerMember;
@@ -40,6 +43,8 @@ struct PreparedSpecies {
   Species species;
   ModelOptions options;
   RotorAnalysis rotor;
+  std::optional<PointGroup> point_group;  // of the geometry (absent without atoms, or an adsorbate)
+  bool racemic = false;                   // R ln 2 added to S (options.racemic and a chiral geometry)
   bool is_gas = true;
   std::vector<double> vibrations_cm1;  // real wavenumbers used, scaled, input order,
                                        // without the torsions replaced by hindered rotors

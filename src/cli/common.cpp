@@ -66,6 +66,13 @@ void add_common_options(CLI::App& sub, CommonOptions& o, bool with_temps,
                  "treat imaginary wavenumbers smaller than this (cm^-1) as real, with a warning");
   sub.add_flag("--allow-mode-count-mismatch", o.mode_count_warning,
                "warn instead of failing when the number of frequencies is not 3N-6 / 3N-5");
+  sub.add_option("--symmetry-tolerance", o.symmetry_tolerance_angstrom,
+                 "distance (angstrom) within which an atom's image must meet an equivalent atom when the "
+                 "point group is detected")
+      ->capture_default_str();
+  sub.add_flag(
+      "--racemic", o.racemic,
+      "chiral species (no mirror plane, inversion centre or S2n axis) as racemic mixtures: S + R ln 2");
   sub.add_option(
          "--formation-reactions", o.formation_reactions,
          "reaction files (comma-separated or repeated), each with an 'unknown': that species' enthalpy of "
@@ -106,6 +113,8 @@ ModelOptions model_options(const CommonOptions& o) {
   m.transition_state = o.transition_state;
   m.imaginary_as_real_below_cm1 = o.imaginary_as_real_below_cm1;
   m.mode_count_mismatch_is_warning = o.mode_count_warning;
+  m.symmetry_tolerance_angstrom = o.symmetry_tolerance_angstrom;
+  m.racemic = o.racemic;
   check_model_options(m);
   return m;
 }

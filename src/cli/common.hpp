@@ -48,6 +48,8 @@ struct CommonOptions {
   bool transition_state = false;
   double imaginary_as_real_below_cm1 = 0.0;
   bool mode_count_warning = false;
+  double symmetry_tolerance_angstrom = default_symmetry_tolerance_angstrom;
+  bool racemic = false;
   unsigned jobs = 0;                             // 0: every core
   std::string method_file;                       // --method: for species without their own `method` key
   std::vector<std::string> formation_reactions;  // --formation-reactions: reaction files with `unknown`

@@ -35,7 +35,8 @@ std::vector<std::pair<std::string, std::string>> model_option_list(const FitCliO
           {"frequency_scale", fmt::format("{:g}", o.common.frequency_scale)},
           {"transition_state", o.common.transition_state ? "true" : "false"},
           {"imaginary_as_real_below_cm1", fmt::format("{:g}", o.common.imaginary_as_real_below_cm1)},
-          {"allow_missing_hf", o.allow_missing_hf ? "true" : "false"}};
+          {"allow_missing_hf", o.allow_missing_hf ? "true" : "false"},
+          {"symmetry_tolerance_angstrom", fmt::format("{:g}", o.common.symmetry_tolerance_angstrom)}};
 }
 
 void log_fit(const SpeciesFit& f, std::vector<LogLine>& log) {
@@ -113,6 +114,10 @@ void setup_fit(CLI::App& sub) {
           species_options.push_back({"scale_entropy", fmt::format("{:g}", p.scale.entropy)});
           species_options.push_back(
               {"low_frequency", low_frequency_method_name(p.vibration_adjustment.options.method)});
+          species_options.push_back(
+              {"symmetry_number", fmt::format("{}", p.species.symmetry_number.value_or(1))});
+          if (p.point_group) species_options.push_back({"point_group", p.point_group->label});
+          species_options.push_back({"racemic", p.racemic ? "true" : "false"});
           if (!p.conformers.empty())
             species_options.push_back({"conformers", fmt::format("{}", p.conformers.size())});
           return FitRecord{std::move(f), {in.path, sha256_hex(in.bytes), std::move(species_options)}};

@@ -35,8 +35,8 @@ std::string caption(const PreparedSpecies& p) {
                        p.zero_point_energy_J_per_mol / 1e3) +
            model_line(p);
   return fmt::format("{} rotor, symmetry number {}, {} vibrations, standard state {}, ZPE {:.3f} kJ/mol",
-                     rotor_type_name(p.rotor.type), p.species.symmetry_number, p.vibrations_cm1.size(),
-                     standard, p.zero_point_energy_J_per_mol / 1e3) +
+                     rotor_type_name(p.rotor.type), p.species.symmetry_number.value_or(1),
+                     p.vibrations_cm1.size(), standard, p.zero_point_energy_J_per_mol / 1e3) +
          model_line(p);
 }
 

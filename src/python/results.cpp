@@ -154,6 +154,7 @@ py::dict facts_dict(const PreparedSpecies& prepared) {
     d["rotational_temperatures"] = array(f.rotational_temperatures_K);
   }
   d["symmetry_number"] = f.symmetry_number;
+  d["point_group"] = f.point_group.empty() ? py::object(py::none()) : py::object(py::str(f.point_group));
   d["atoms"] = f.atom_count;
   d["expected_modes"] = f.expected_modes;
   d["given_modes"] = f.given_modes;
