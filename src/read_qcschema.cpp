@@ -196,20 +196,16 @@ void QcReader::molecule(const json& m, const JsonPath& path, Species& species) c
   species.formula = formula_of(species.atoms);
   species.key_locations["atoms"] = at(sp);
 
-  int electrons = 0;
-  for (const Atom& a : species.atoms) electrons += find_element(a.symbol)->atomic_number;
   if (const json* q = member(m, "molecular_charge")) {
     species.charge = whole_number(*q, path / "molecular_charge", -1000);
     species.key_locations["charge"] = at(path / "molecular_charge");
   }
-  electrons -= species.charge;
-  // Without a multiplicity QCSchema takes the lowest one the electron count allows.
-  int multiplicity = electrons % 2 == 0 ? 1 : 2;
+  // Without a multiplicity QCSchema takes the lowest one the electron count allows, as
+  // prepare_species does for an absent one (electrons.hpp).
   if (const json* s = member(m, "molecular_multiplicity")) {
-    multiplicity = whole_number(*s, path / "molecular_multiplicity", 1);
+    species.electronic_levels = {{0.0, whole_number(*s, path / "molecular_multiplicity", 1)}};
     species.key_locations["spin_multiplicity"] = at(path / "molecular_multiplicity");
   }
-  species.electronic_levels = {{0.0, multiplicity}};
   if (const json* name = member(m, "name");
       name && name->is_string() && !name->get_ref<const std::string&>().empty()) {
     for (char c : name->get_ref<const std::string&>())

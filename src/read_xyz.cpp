@@ -118,6 +118,7 @@ void XyzReader::read_comment_line(std::string_view line, int line_number, Specie
       species.symmetry_number = positive_integer();
     } else if (key == "spin_multiplicity") {
       species.electronic_levels = {{0.0, positive_integer()}};
+      species.key_locations["spin_multiplicity"] = {file_, line_number, value_column};
     } else if (key == "enthalpy_of_formation") {
       std::optional<double> v = parse_number(value);
       if (!v)

@@ -351,7 +351,10 @@ Species YamlReader::read(const std::string& text) {
           "both 'spin_multiplicity' and 'electronic_levels' given, expected one of them " +
               std::string("(the ground level's degeneracy in 'electronic_levels' includes the spin)"));
   if (spin) species.electronic_levels = {{0.0, positive_integer(*spin, "'spin_multiplicity'")}};
-  if (levels) species.electronic_levels = electronic_levels(*levels);
+  if (levels) {
+    species.electronic_levels = electronic_levels(*levels);
+    species.key_locations.erase("spin_multiplicity");  // a `from:` file's multiplicity is replaced
+  }
   if (const YAML::Node* h = find(e, "enthalpy_of_formation"))
     species.enthalpy_of_formation_J_per_mol = energy_J_per_mol(*h, "'enthalpy_of_formation'");
   read_energy_keys(e, species);

@@ -6,6 +6,7 @@
 #include <cmath>
 
 #include "vibtherm/conformers.hpp"
+#include "vibtherm/electrons.hpp"
 #include "vibtherm/hessian.hpp"
 #include "vibtherm/limits.hpp"
 
@@ -401,6 +402,9 @@ PreparedSpecies prepare_species(const Species& species, const ModelOptions& opti
          fmt::format("symmetry number must be a positive integer, got {}", *species.symmetry_number));
   p.rotor = analyse_rotor(species, options.linear_tolerance_amu_A2);
   choose_symmetry(p);
+  ElectronicChoice electronic = choose_electronic_levels(p.species);
+  p.species.electronic_levels = std::move(electronic.levels);
+  p.notes.insert(p.notes.end(), electronic.notes.begin(), electronic.notes.end());
   if (species.hessian_J_per_m2) {
     frequencies_from_hessian(p);
     for (double v : p.species.frequencies_cm1)

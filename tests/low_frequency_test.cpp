@@ -3,6 +3,7 @@
 #include <doctest/doctest.h>
 #include <fmt/format.h>
 
+#include <algorithm>
 #include <cmath>
 
 #include "test_species.hpp"
@@ -162,9 +163,10 @@ TEST_CASE("scale factors per quantity") {
   CHECK(q.scale.zpe == 0.8);
   CHECK(q.scale.enthalpy == 0.95);
   CHECK(q.scale.entropy == 0.97);
-  CHECK(
-      q.notes.front().find("zero-point energy 0.8, thermal enthalpy 0.95, entropy and heat capacity 0.97") !=
-      std::string::npos);
+  CHECK(std::any_of(q.notes.begin(), q.notes.end(), [](const std::string& n) {
+    return n.find("zero-point energy 0.8, thermal enthalpy 0.95, entropy and heat capacity 0.97") !=
+           std::string::npos;
+  }));
   f.scale.zpe = -1.0;
   CHECK_THROWS_AS(prepare_species(f), InputError);
 }

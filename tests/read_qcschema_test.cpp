@@ -7,6 +7,8 @@
 #include <iterator>
 
 #include "vibtherm/constants.hpp"
+#include "vibtherm/electrons.hpp"
+#include "vibtherm/electrons.hpp"
 #include "vibtherm/read_species.hpp"
 #include "vibtherm/thermo.hpp"
 
@@ -52,7 +54,7 @@ TEST_CASE("QCSchema: a Hessian result reads as the same species as the YAML Hess
   for (std::size_t k = 0; k < 81; ++k)
     CHECK((*qc.hessian_J_per_m2)[k] == doctest::Approx((*yaml.hessian_J_per_m2)[k]).epsilon(1e-15));
   CHECK(qc.charge == 0);
-  CHECK(qc.electronic_levels[0].degeneracy == 1);
+  CHECK(choose_electronic_levels(qc).levels[0].degeneracy == 1);
   REQUIRE(qc.electronic_energy_J_per_mol.has_value());
   // -76.0 hartree (the file's placeholder) times E_h N_A (CODATA 2018).
   CHECK(*qc.electronic_energy_J_per_mol ==
@@ -101,11 +103,14 @@ TEST_CASE("QCSchema: flat Hessian, masses, charge and multiplicity") {
   CHECK(m.atoms[1].mass_number == 2);
   CHECK(m.charge == 1);
   CHECK(m.electronic_levels[0].degeneracy == 2);
-  CHECK(read_species_qcschema("{\"schema_name\": \"qcschema_molecule\", \"symbols\": [\"O\", \"H\"], "
-                              "\"geometry\": [[0, 0, 0], [0, 0, 1.8]]}",
-                              "oh.json", true)
-            .electronic_levels[0]
-            .degeneracy == 2);  // 9 electrons: a doublet (QCSchema's default)
+  // No multiplicity: the reader leaves the levels to the parity rule, 9 electrons give a
+  // doublet (QCSchema's default too).
+  const Species oh = read_species_qcschema(
+      "{\"schema_name\": \"qcschema_molecule\", \"symbols\": [\"O\", \"H\"], \"geometry\": [[0, 0, 0], [0, "
+      "0, 1.8]]}",
+      "oh.json", true);
+  CHECK(oh.electronic_levels.empty());
+  CHECK(choose_electronic_levels(oh).levels[0].degeneracy == 2);
 }
 
 TEST_CASE("QCSchema: errors are located") {

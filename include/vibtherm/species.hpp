@@ -91,7 +91,9 @@ struct Species {
   // External symmetry number as given; absent: detected from `atoms` (point_group.hpp). After
   // prepare_species it holds the one used.
   std::optional<int> symmetry_number;
-  std::vector<ElectronicLevel> electronic_levels{{0.0, 1}};
+  // As given (`spin_multiplicity` or `electronic_levels`); empty: from the electron count's
+  // parity (electrons.hpp). After prepare_species it holds the levels used.
+  std::vector<ElectronicLevel> electronic_levels;
   std::optional<double> enthalpy_of_formation_J_per_mol;  // ΔfH°(298.15 K)
   // Total electronic energy at the equilibrium geometry (input key `electronic_energy`,
   // hartree when bare; or a QC exchange file), molar: formation.hpp turns it into ΔfH°.

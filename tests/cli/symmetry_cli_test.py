@@ -1,4 +1,5 @@
-"""Point group and symmetry number detected from the geometry, through the executable."""
+"""Point group and symmetry number detected from the geometry, and the spin from the electron
+count, through the executable."""
 import json
 import math
 import pathlib
@@ -75,6 +76,20 @@ def main():
     c.check("rotational constants without symmetry_number: one located line, exit 2",
             r.returncode == 2 and "no 'symmetry_number'" in r.stderr and len(r.stderr.strip().splitlines()) == 1,
             r.stderr)
+
+    # Spin from the electron count: CH3 (9 electrons) without spin_multiplicity is a doublet;
+    # S°(298.15 K) about 194 J/(mol K) (NIST-JANAF, Chase 1998, lists 194.2, from memory).
+    s, r = s298(str(data / "methyl.yaml"))
+    c.check("CH3 without spin_multiplicity: doublet, S(298.15) = 194.0 +- 0.5", s is not None and abs(s - 194.0) < 0.5,
+            (s, r.stderr))
+    c.check("the doublet is said in the notes", "spin multiplicity 2 (doublet) from the electron count 9" in r.stderr,
+            r.stderr)
+    r = c.run("table", str(root / "tests" / "bad" / "spin_parity_methyl_singlet.yaml"))
+    c.check("CH3 with spin_multiplicity 1: one located line naming both, exit 2",
+            r.returncode == 2 and "spin_multiplicity 1" in r.stderr and "9 electrons" in r.stderr and
+            len(r.stderr.strip().splitlines()) == 1, r.stderr)
+    r = c.run("table", str(root / "tests" / "data" / "oxygen.yaml"))
+    c.check("O2 with spin_multiplicity 3: accepted", r.returncode == 0, r.stderr)
     c.finish()
 
 
