@@ -8,7 +8,6 @@
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/electrons.hpp"
-#include "vibtherm/electrons.hpp"
 #include "vibtherm/read_species.hpp"
 #include "vibtherm/thermo.hpp"
 
