@@ -172,51 +172,151 @@ int potential_period(const TorsionPotential& v) {
 
 }  // namespace
 
-TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential) {
+namespace {
+
+double rotational_constant_J_per_mol(double reduced_moment_amu_A2) {
   const double I_kg_m2 = reduced_moment_amu_A2 * c::atomic_mass_constant_kg * c::angstrom_m * c::angstrom_m;
   const double hbar = c::planck_J_s / (2.0 * c::pi);
-  const double B_cm1 = hbar * hbar / (2.0 * I_kg_m2) * c::avogadro_per_mol / c::wavenumber_J_per_mol;
-  double v_max = potential.value_J_per_mol(0.0);
-  for (int i = 1; i < 7200; ++i) v_max = std::max(v_max, potential.value_J_per_mol(2.0 * c::pi * i / 7200.0));
-  const double range_cm1 = (v_max - potential.minimum_J_per_mol()) / c::wavenumber_J_per_mol;
-  // Clamped as a double first: a huge barrier must not overflow the conversion to int.
-  const double wanted = std::ceil(std::sqrt((range_cm1 + 1e5) / B_cm1));
-  const int M = static_cast<int>(std::clamp(std::isfinite(wanted) ? wanted : 800.0, 20.0, 800.0));
-  return torsion_levels(reduced_moment_amu_A2, potential, M);
+  return hbar * hbar / (2.0 * I_kg_m2) * c::avogadro_per_mol;
 }
 
+// Several cosine terms or any sine term: the blocks need a dense solver.
+bool needs_dense_solver(const TorsionPotential& v) {
+  int cosine_terms = 0;
+  for (std::size_t k = 1; k < v.cos_J_per_mol.size(); ++k) {
+    if (v.sin_J_per_mol[k] != 0.0) return true;
+    cosine_terms += v.cos_J_per_mol[k] != 0.0 ? 1 : 0;
+  }
+  return cosine_terms > 1;
+}
+
+// Weight of the highest level relative to the level sum at T (levels from the ground, 0).
+double top_level_weight(const std::vector<double>& energies_J_per_mol, double T_K) {
+  const double RT = c::gas_constant_J_per_mol_K * T_K;
+  double q = 0.0;
+  for (double e : energies_J_per_mol) q += std::exp(-e / RT);
+  return std::exp(-energies_J_per_mol.back() / RT) / q;
+}
+
+}  // namespace
+
 TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential,
-                             int basis_max_m) {
-  const double I_kg_m2 = reduced_moment_amu_A2 * c::atomic_mass_constant_kg * c::angstrom_m * c::angstrom_m;
-  const double hbar = c::planck_J_s / (2.0 * c::pi);
-  const double B_J_per_mol = hbar * hbar / (2.0 * I_kg_m2) * c::avogadro_per_mol;
+                             double max_temperature_K, const SourceLocation& where, std::string_view rotor) {
+  const double B = rotational_constant_J_per_mol(reduced_moment_amu_A2);
+  double v_max = potential.value_J_per_mol(0.0);
+  for (int i = 1; i < 7200; ++i) v_max = std::max(v_max, potential.value_J_per_mol(2.0 * c::pi * i / 7200.0));
+  const double range = v_max - potential.minimum_J_per_mol();
+  const double RT = c::gas_constant_J_per_mol_K * max_temperature_K;
+  // First guess: free-rotor levels B m² reach the potential's range plus 40 RT_max; the
+  // check after diagonalising decides. Clamped as a double: no overflow converting to int.
+  const double wanted = std::ceil(std::sqrt((range + 40.0 * RT) / B));
+  int M = static_cast<int>(std::clamp(std::isfinite(wanted) ? wanted : double(max_rotor_basis_m), 20.0,
+                                      double(max_rotor_basis_m)));
+  // With a dense solver the cap is on the block size, (2M + 1)/g functions.
+  const int g = potential_period(potential);
+  const int cap = needs_dense_solver(potential)
+                      ? std::min(max_rotor_basis_m, (max_rotor_dense_block * g - 1) / 2)
+                      : max_rotor_basis_m;
+  // A first estimate beyond twice the cap cannot converge within it: no diagonalisation
+  // (a heavy top's blocks are the slowest to diagonalise).
+  const bool hopeless = !(wanted <= 2.0 * cap);
+  M = std::min(M, cap);
+  for (;;) {
+    if (!hopeless) {
+      TorsionLevels levels = torsion_levels_in_basis(reduced_moment_amu_A2, potential, M);
+      levels.max_temperature_K = max_temperature_K;
+      if (top_level_weight(levels.energies_J_per_mol, max_temperature_K) < rotor_top_level_weight)
+        return levels;
+    }
+    if (hopeless || M >= cap)
+      fail(where, fmt::format("{}: the level sum at {:g} K is not converged in the largest basis |m| <= {} "
+                              "(reduced moment {:g} amu A^2), expected a lower highest temperature or a "
+                              "lighter top",
+                              rotor, max_temperature_K, cap, reduced_moment_amu_A2));
+    M = std::min(cap, M + M / 2);
+  }
+}
+
+TorsionLevels torsion_levels_in_basis(double reduced_moment_amu_A2, const TorsionPotential& potential,
+                                      int basis_max_m) {
+  const double B_J_per_mol = rotational_constant_J_per_mol(reduced_moment_amu_A2);
   const int K = static_cast<int>(potential.cos_J_per_mol.size()) - 1;
   // V couples m only to m ± k with k a multiple of the potential's period g, so the
-  // basis splits into g independent blocks of m ≡ r (mod g).
+  // basis splits into g independent blocks of m ≡ r (mod g); within a block (m = r + g j)
+  // the matrix is banded, bandwidth K/g.
   const int g = potential_period(potential);
-  std::vector<double> all;
+  const int band = K / g;
+  bool has_sine = false;
+  int cosine_terms = 0;
+  for (int k = 1; k <= K; ++k) {
+    const auto uk = static_cast<std::size_t>(k);
+    has_sine = has_sine || potential.sin_J_per_mol[uk] != 0.0;
+    cosine_terms += potential.cos_J_per_mol[uk] != 0.0 ? 1 : 0;
+  }
+  std::vector<std::vector<double>> blocks(static_cast<std::size_t>(g));
   for (int r = 0; r < g; ++r) {
+    std::vector<double>& out = blocks[static_cast<std::size_t>(r)];
+    // An even potential (no sine) commutes with m → −m, which maps block r onto block
+    // g − r: their levels are equal, so the second is copied.
+    if (!has_sine && r > g - r) {
+      out = blocks[static_cast<std::size_t>(g - r)];
+      continue;
+    }
     std::vector<int> ms;
     for (int m = -basis_max_m; m <= basis_max_m; ++m)
       if (((m % g) + g) % g == r) ms.push_back(m);
     const Eigen::Index n = static_cast<Eigen::Index>(ms.size());
-    Eigen::MatrixXcd H = Eigen::MatrixXcd::Zero(n, n);
-    for (Eigen::Index i = 0; i < n; ++i) {
+    if (n == 0) continue;
+    if ((has_sine || cosine_terms > 1) && n > max_rotor_dense_block)
+      fail({}, fmt::format("a block of {} basis functions exceeds the dense solver's {}", n,
+                           max_rotor_dense_block));
+    const auto diagonal = [&](Eigen::Index i) {
       const double m = ms[static_cast<std::size_t>(i)];
-      H(i, i) = B_J_per_mol * m * m + potential.cos_J_per_mol[0];
-      for (Eigen::Index j = 0; j < n; ++j) {
-        const int k = ms[static_cast<std::size_t>(i)] - ms[static_cast<std::size_t>(j)];  // <m_i|V|m_j>
-        if (k == 0 || std::abs(k) > K) continue;
-        const auto uk = static_cast<std::size_t>(std::abs(k));
-        // cos kφ = (e^{ikφ} + e^{−ikφ})/2, sin kφ = (e^{ikφ} − e^{−ikφ})/(2i).
-        const double sign = k > 0 ? 1.0 : -1.0;
-        H(i, j) = std::complex<double>(0.5 * potential.cos_J_per_mol[uk],
-                                       -0.5 * sign * potential.sin_J_per_mol[uk]);
+      return B_J_per_mol * m * m + potential.cos_J_per_mol[0];
+    };
+    if (!has_sine && cosine_terms <= 1) {
+      // One cosine term (k = g): <m|V|m ± g> = cos_g / 2, a real tridiagonal block.
+      Eigen::VectorXd d(n);
+      Eigen::VectorXd e = Eigen::VectorXd::Constant(
+          std::max<Eigen::Index>(n - 1, 0), 0.5 * potential.cos_J_per_mol[static_cast<std::size_t>(g)]);
+      for (Eigen::Index i = 0; i < n; ++i) d(i) = diagonal(i);
+      if (n == 1) {
+        out.push_back(d(0));
+        continue;
       }
+      Eigen::SelfAdjointEigenSolver<Eigen::MatrixXd> solver;
+      solver.computeFromTridiagonal(d, e, Eigen::EigenvaluesOnly);
+      for (Eigen::Index i = 0; i < n; ++i) out.push_back(solver.eigenvalues()(i));
+    } else if (!has_sine) {
+      // Several cosine terms: real symmetric (cos kφ = (e^{ikφ} + e^{−ikφ})/2).
+      Eigen::MatrixXd H = Eigen::MatrixXd::Zero(n, n);
+      for (Eigen::Index i = 0; i < n; ++i) {
+        H(i, i) = diagonal(i);
+        for (Eigen::Index j = std::max<Eigen::Index>(0, i - band); j < std::min(n, i + band + 1); ++j)
+          if (j != i) H(i, j) = 0.5 * potential.cos_J_per_mol[static_cast<std::size_t>(std::abs(i - j) * g)];
+      }
+      Eigen::SelfAdjointEigenSolver<Eigen::MatrixXd> solver(H, Eigen::EigenvaluesOnly);
+      for (Eigen::Index i = 0; i < n; ++i) out.push_back(solver.eigenvalues()(i));
+    } else {
+      // Sine terms: complex Hermitian, sin kφ = (e^{ikφ} − e^{−ikφ})/(2i).
+      Eigen::MatrixXcd H = Eigen::MatrixXcd::Zero(n, n);
+      for (Eigen::Index i = 0; i < n; ++i) {
+        H(i, i) = diagonal(i);
+        for (Eigen::Index j = std::max<Eigen::Index>(0, i - band); j < std::min(n, i + band + 1); ++j) {
+          const int k = ms[static_cast<std::size_t>(i)] - ms[static_cast<std::size_t>(j)];  // <m_i|V|m_j>
+          if (k == 0) continue;
+          const auto uk = static_cast<std::size_t>(std::abs(k));
+          const double sign = k > 0 ? 1.0 : -1.0;
+          H(i, j) = std::complex<double>(0.5 * potential.cos_J_per_mol[uk],
+                                         -0.5 * sign * potential.sin_J_per_mol[uk]);
+        }
+      }
+      Eigen::SelfAdjointEigenSolver<Eigen::MatrixXcd> solver(H, Eigen::EigenvaluesOnly);
+      for (Eigen::Index i = 0; i < n; ++i) out.push_back(solver.eigenvalues()(i));
     }
-    Eigen::SelfAdjointEigenSolver<Eigen::MatrixXcd> solver(H, Eigen::EigenvaluesOnly);
-    for (Eigen::Index i = 0; i < n; ++i) all.push_back(solver.eigenvalues()(i));
   }
+  std::vector<double> all;
+  for (const std::vector<double>& b : blocks) all.insert(all.end(), b.begin(), b.end());
   std::sort(all.begin(), all.end());
   TorsionLevels out;
   out.basis_max_m = basis_max_m;
@@ -226,6 +326,12 @@ TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotentia
 }
 
 MotionTerms hindered_rotor_terms(const TorsionLevels& levels, int symmetry, double T_K) {
+  // Above the temperature the basis was converged for, the truncated level sum would be
+  // silently wrong (1e-9 of slack for a T_max that went through a text round trip).
+  if (T_K > levels.max_temperature_K * (1.0 + 1e-9))
+    fail({}, fmt::format("hindered rotor levels are converged up to {:g} K, asked at {:g} K, expected the "
+                         "run's highest temperature to size the basis (ModelOptions::max_temperature_K)",
+                         levels.max_temperature_K, T_K));
   const double RT = c::gas_constant_J_per_mol_K * T_K;
   // Levels are counted from the ground level (0), so every weight is ≤ 1: no overflow.
   double q = 0.0, e1 = 0.0, e2 = 0.0;
@@ -247,7 +353,8 @@ MotionTerms hindered_rotor_terms(const TorsionLevels& levels, int symmetry, doub
   return t;
 }
 
-HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRotor& rotor) {
+HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRotor& rotor,
+                                        double max_temperature_K) {
   HinderedRotorModel m;
   m.input = rotor;
   // Checked here too for species built in code: a period above the basis' block count
@@ -266,7 +373,8 @@ HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRo
                      a + 1, b + 1));
   m.potential = rotor.barrier_J_per_mol ? cosine_barrier(*rotor.barrier_J_per_mol, rotor.symmetry)
                                         : fit_scan(rotor.scan, rotor.symmetry, rotor.where);
-  m.levels = torsion_levels(m.reduced_moment_amu_A2, m.potential);
+  m.levels = torsion_levels(m.reduced_moment_amu_A2, m.potential, max_temperature_K, rotor.where,
+                            fmt::format("hindered rotor about atoms {}-{}", a + 1, b + 1));
   return m;
 }
 

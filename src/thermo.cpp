@@ -163,7 +163,8 @@ void replace_torsions(PreparedSpecies& p) {
                        "cm^-1, expected one of the frequencies",
                        r.replaces_cm1, replaces_tolerance_cm1));
     taken[best] = 1;
-    p.hindered_rotors.push_back(build_hindered_rotor(s, r));
+    p.hindered_rotors.push_back(build_hindered_rotor(
+        s, r, std::max(p.options.max_temperature_K, constants::reference_temperature_K)));
     p.notes.push_back(
         fmt::format("hindered rotor about atoms {}-{} (symmetry {}, reduced moment {:.3f} amu A^2) replaces "
                     "the mode at {:.1f} "
@@ -386,6 +387,7 @@ void check_model_options(const ModelOptions& options) {
   limits::check_range(options.imaginary_as_real_below_cm1, 0.0, limits::max_wavenumber_cm1,
                       "--imaginary-as-real-below", "cm^-1");
   limits::check_range(options.symmetry_tolerance_angstrom, 1e-6, 0.25, "--symmetry-tolerance", "angstrom");
+  limits::check_temperature(options.max_temperature_K, "highest temperature of the run");
 }
 
 PreparedSpecies prepare_species(const Species& species, const ModelOptions& options) {

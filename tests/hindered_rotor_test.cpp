@@ -2,7 +2,10 @@
 
 #include <doctest/doctest.h>
 
+#include <Eigen/Dense>
+#include <algorithm>
 #include <cmath>
+#include <complex>
 
 #include "test_species.hpp"
 #include "vibtherm/constants.hpp"
@@ -34,7 +37,54 @@ std::vector<Atom> ethane_like() {
   return atoms;
 }
 
+// The plain solver the block solvers replaced: the whole basis |m| <= M as one complex
+// Hermitian dense matrix, <m|V|m'> from cos kφ = (e^{ikφ} + e^{−ikφ})/2 and
+// sin kφ = (e^{ikφ} − e^{−ikφ})/(2i), levels from the ground (definition).
+std::vector<double> dense_levels(double I_amu_A2, const TorsionPotential& v, int M) {
+  const double B = rotational_constant_J_per_mol(I_amu_A2);
+  const int K = static_cast<int>(v.cos_J_per_mol.size()) - 1;
+  const Eigen::Index n = 2 * M + 1;
+  Eigen::MatrixXcd H = Eigen::MatrixXcd::Zero(n, n);
+  for (Eigen::Index i = 0; i < n; ++i)
+    for (Eigen::Index j = 0; j < n; ++j) {
+      const long k = i - j;
+      if (k == 0) H(i, i) = B * double((i - M) * (i - M)) + v.cos_J_per_mol[0];
+      if (k == 0 || std::abs(k) > K) continue;
+      const auto uk = static_cast<std::size_t>(std::abs(k));
+      H(i, j) = {0.5 * v.cos_J_per_mol[uk], -0.5 * (k > 0 ? 1.0 : -1.0) * v.sin_J_per_mol[uk]};
+    }
+  Eigen::SelfAdjointEigenSolver<Eigen::MatrixXcd> solver(H, Eigen::EigenvaluesOnly);
+  std::vector<double> out;
+  for (Eigen::Index i = 0; i < n; ++i) out.push_back(solver.eigenvalues()(i) - solver.eigenvalues()(0));
+  return out;
+}
+
 }  // namespace
+
+TEST_CASE("block solvers (tridiagonal, real dense, complex dense) equal one dense complex matrix") {
+  // Definition check: each solver path against the full complex Hermitian matrix, 1e-10
+  // relative, and 1e-12 of the highest level absolute (for the levels near the ground).
+  TorsionPotential one = cosine_barrier(10e3, 3);  // tridiagonal blocks
+  TorsionPotential several = one;                  // real dense blocks (test coefficients)
+  several.cos_J_per_mol.resize(10, 0.0);
+  several.sin_J_per_mol.resize(10, 0.0);
+  several.cos_J_per_mol[6] = 1.2e3;
+  several.cos_J_per_mol[9] = -0.4e3;
+  TorsionPotential sine = several;  // complex dense blocks
+  sine.sin_J_per_mol[3] = 0.8e3;
+  sine.sin_J_per_mol[6] = -0.3e3;
+  TorsionPotential two_fold = cosine_barrier(5e3, 2);  // even period: block 1 maps onto itself
+  for (const TorsionPotential* v : {&one, &several, &sine, &two_fold}) {
+    const std::vector<double> expected = dense_levels(7.5, *v, 60);
+    const TorsionLevels got = torsion_levels_in_basis(7.5, *v, 60);
+    REQUIRE(got.energies_J_per_mol.size() == expected.size());
+    for (std::size_t i = 0; i < expected.size(); ++i) {
+      CAPTURE(i);
+      CHECK(got.energies_J_per_mol[i] ==
+            doctest::Approx(expected[i]).epsilon(1e-10).scale(1e-2 * expected.back()));
+    }
+  }
+}
 
 TEST_CASE("reduced moment of two identical tops is half of one top's moment") {
   const std::vector<Atom> atoms = ethane_like();
@@ -58,7 +108,7 @@ TEST_CASE("a ring bond cannot be split into two tops") {
 
 TEST_CASE("zero barrier: the free internal rotor") {
   const double I = 1.5;  // amu Å², test parameter
-  const TorsionLevels levels = torsion_levels(I, cosine_barrier(0.0, 3));
+  const TorsionLevels levels = torsion_levels(I, cosine_barrier(0.0, 3), 6000.0);
   // Free rotor levels B m², each |m| > 0 twice (textbook).
   const double B = rotational_constant_J_per_mol(I);
   REQUIRE(levels.energies_J_per_mol.size() >= 5);
@@ -81,7 +131,7 @@ TEST_CASE("zero barrier: the free internal rotor") {
 TEST_CASE("high barrier: the torsional oscillator") {
   const double I = 3.0, V = 200e3;  // amu Å², J/mol: test parameters
   const int n = 3;
-  const TorsionLevels levels = torsion_levels(I, cosine_barrier(V, n));
+  const TorsionLevels levels = torsion_levels(I, cosine_barrier(V, n), 6000.0);
   // Small oscillations of V/2 (1 − cos nφ) ≈ V n² φ²/4 have ω = n √(V/(2I)), so
   // ħω = n √(V B) with B = ħ²/(2I) (derived). First-order perturbation by the quartic term
   // −V n⁴ φ⁴/48 lowers the first spacing by n² B / 4 (derived). The n levels of each
@@ -101,8 +151,8 @@ TEST_CASE("high barrier: the torsional oscillator") {
 }
 
 TEST_CASE("low barrier: the free-rotor limit at T >> V/k") {
-  const double I = 1.5;                                                    // amu Å², test parameter
-  const TorsionLevels levels = torsion_levels(I, cosine_barrier(2e3, 3));  // V/R = 240 K
+  const double I = 1.5;                                                            // amu Å², test parameter
+  const TorsionLevels levels = torsion_levels(I, cosine_barrier(2e3, 3), 6000.0);  // V/R = 240 K
   // Classical hindered rotor (Pitzer & Gwinn 1942, from memory): Cv/R → ½ as V/kT → 0.
   CHECK(hindered_rotor_terms(levels, 3, 5000.0).Cv_over_R == doctest::Approx(0.5).epsilon(5e-3));
   // Near the barrier-crossing temperature Cv/R exceeds its free-rotor value.
@@ -110,7 +160,7 @@ TEST_CASE("low barrier: the free-rotor limit at T >> V/k") {
 }
 
 TEST_CASE("internal symmetry number divides q") {
-  const TorsionLevels levels = torsion_levels(1.5, cosine_barrier(12e3, 3));
+  const TorsionLevels levels = torsion_levels(1.5, cosine_barrier(12e3, 3), 6000.0);
   const MotionTerms one = hindered_rotor_terms(levels, 1, 500.0),
                     three = hindered_rotor_terms(levels, 3, 500.0);
   // ln q − ln σ_int (textbook): S drops by R ln 3, energies and Cv unchanged.
@@ -124,8 +174,8 @@ TEST_CASE("a cosine potential given as a scan gives the barrier's levels") {
   std::vector<ScanPoint> scan;
   for (int deg = 0; deg < 120; deg += 10)
     scan.push_back({deg + 0.0, 0.5 * V * (1.0 - std::cos(3.0 * deg * c::pi / 180.0))});
-  const TorsionLevels a = torsion_levels(1.5, cosine_barrier(V, 3));
-  const TorsionLevels b = torsion_levels(1.5, fit_scan(scan, 3, {}));
+  const TorsionLevels a = torsion_levels(1.5, cosine_barrier(V, 3), 6000.0);
+  const TorsionLevels b = torsion_levels(1.5, fit_scan(scan, 3, {}), 6000.0);
   REQUIRE(a.energies_J_per_mol.size() == b.energies_J_per_mol.size());
   for (std::size_t i = 1; i < 40; ++i)
     CHECK(b.energies_J_per_mol[i] == doctest::Approx(a.energies_J_per_mol[i]).epsilon(1e-6));
@@ -134,7 +184,7 @@ TEST_CASE("a cosine potential given as a scan gives the barrier's levels") {
   std::vector<ScanPoint> full;
   for (int deg = 0; deg < 360; deg += 15)
     full.push_back({deg + 0.0, 0.5 * V * (1.0 - std::cos(3.0 * (deg + 60.0) * c::pi / 180.0))});
-  const TorsionLevels d = torsion_levels(1.5, fit_scan(full, 3, {}));
+  const TorsionLevels d = torsion_levels(1.5, fit_scan(full, 3, {}), 6000.0);
   for (std::size_t i = 1; i < 40; ++i)
     CHECK(d.energies_J_per_mol[i] == doctest::Approx(a.energies_J_per_mol[i]).epsilon(1e-6));
 }
@@ -146,12 +196,14 @@ TEST_CASE("a scan must cover a whole period") {
 }
 
 TEST_CASE("basis size converges the levels") {
-  // The automatic basis against one twice as large: the thermally reachable levels agree.
+  // The automatic basis against one twice as large: the thermally reachable levels agree (to
+  // 1e-10 relative, and 1e-9 J/mol absolute: rounding on a matrix of norm B M^2).
   const TorsionPotential v = cosine_barrier(12e3, 3);
-  const TorsionLevels automatic = torsion_levels(1.5, v);
-  const TorsionLevels larger = torsion_levels(1.5, v, 2 * automatic.basis_max_m);
+  const TorsionLevels automatic = torsion_levels(1.5, v, 6000.0);
+  const TorsionLevels larger = torsion_levels_in_basis(1.5, v, 2 * automatic.basis_max_m);
   for (std::size_t i = 1; i < 100; ++i)
-    CHECK(automatic.energies_J_per_mol[i] == doctest::Approx(larger.energies_J_per_mol[i]).epsilon(1e-10));
+    CHECK(automatic.energies_J_per_mol[i] ==
+          doctest::Approx(larger.energies_J_per_mol[i]).epsilon(1e-10).scale(10.0));
   const MotionTerms a = hindered_rotor_terms(automatic, 3, 3000.0),
                     b = hindered_rotor_terms(larger, 3, 3000.0);
   CHECK(a.S_over_R == doctest::Approx(b.S_over_R).epsilon(1e-10));
@@ -205,4 +257,44 @@ TEST_CASE("engine: the rotor replaces its torsion") {
     big.hindered_rotors[0].symmetry = sigma;
     CHECK_THROWS_WITH_AS(prepare_species(big), doctest::Contains("symmetry is"), InputError);
   }
+}
+
+TEST_CASE("basis sized from the highest temperature: converged at 3000 K up to 5000 amu A^2") {
+  // Convergence test (common practice): the automatic basis for T_max = 3000 K against one
+  // twice as large; reduced moments 1 to 5000 amu Å², V = 10 kJ/mol, σ = 3 (test values).
+  const TorsionPotential v = cosine_barrier(10e3, 3);
+  for (double I : {1.0, 100.0, 1000.0, 5000.0}) {
+    CAPTURE(I);
+    const TorsionLevels automatic = torsion_levels(I, v, 3000.0);
+    const TorsionLevels larger = torsion_levels_in_basis(I, v, 2 * automatic.basis_max_m);
+    const MotionTerms a = hindered_rotor_terms(automatic, 3, 3000.0),
+                      b = hindered_rotor_terms(larger, 3, 3000.0);
+    CHECK(a.Cp_over_R == doctest::Approx(b.Cp_over_R).epsilon(1e-6));
+    CHECK(a.S_over_R == doctest::Approx(b.S_over_R).epsilon(1e-6));
+    CHECK(a.H_over_RT == doctest::Approx(b.H_over_RT).epsilon(1e-6));
+  }
+  // The former fixed cap |m| <= 800 truncated 1000 amu Å² at 3000 K: Cp low by about
+  // 0.3 J/(mol K) (issue measurement); the sized basis is not.
+  const TorsionLevels capped = torsion_levels_in_basis(1000.0, v, 800);
+  const TorsionLevels sized = torsion_levels(1000.0, v, 3000.0);
+  const double R = c::gas_constant_J_per_mol_K;
+  const double shortfall = R * (hindered_rotor_terms(capped, 3, 3000.0).Cp_over_R -
+                                hindered_rotor_terms(sized, 3, 3000.0).Cp_over_R);
+  MESSAGE("Cp(|m| <= 800) - Cp(sized basis, |m| <= " << sized.basis_max_m << ") at 3000 K, 1000 amu A^2: "
+                                                     << shortfall << " J/(mol K)");
+  CHECK(shortfall < -0.1);
+}
+
+TEST_CASE("rotor basis: the cap is a located error, and the levels refuse a higher temperature") {
+  const TorsionPotential v = cosine_barrier(10e3, 3);
+  // 1e6 amu Å² at 3000 K needs |m| of about 7e4 (B M² ≈ 40 RT): above max_rotor_basis_m.
+  CHECK_THROWS_WITH_AS(torsion_levels(1e6, v, 3000.0, {"x.yaml", 4, 5}, "hindered rotor about atoms 1-2"),
+                       "x.yaml:4:5: error: hindered rotor about atoms 1-2: the level sum at 3000 K is not "
+                       "converged in the largest basis |m| <= 20000 (reduced moment 1e+06 amu A^2), expected "
+                       "a lower highest temperature or a lighter top",
+                       InputError);
+  const TorsionLevels levels = torsion_levels(1.5, v, 1000.0);
+  CHECK(levels.max_temperature_K == 1000.0);
+  CHECK_NOTHROW(hindered_rotor_terms(levels, 3, 1000.0));
+  CHECK_THROWS_AS(hindered_rotor_terms(levels, 3, 1500.0), InputError);
 }

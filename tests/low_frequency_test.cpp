@@ -56,7 +56,7 @@ TEST_CASE("qrrho free-rotor entropy against the quantum free rotor of the hinder
   const double mu_kg_m2 = constants::planck_J_s / (8.0 * constants::pi * constants::pi *
                                                    constants::speed_of_light_m_s * 100.0 * nu_cm1);
   const double mu_amu_A2 = mu_kg_m2 / (constants::atomic_mass_constant_kg * 1e-20);
-  const TorsionLevels levels = torsion_levels(mu_amu_A2, cosine_barrier(0.0, 1));
+  const TorsionLevels levels = torsion_levels(mu_amu_A2, cosine_barrier(0.0, 1), 6000.0);
   const double quantum = hindered_rotor_terms(levels, 1, T).S_over_R;
   CHECK(free_rotor_entropy_over_R(nu_cm1, T, 1e-30) == doctest::Approx(quantum).epsilon(1e-6));
   // With B_av = 1e-44 kg m² the effective moment is smaller, so the entropy is lower.

@@ -2,6 +2,8 @@
 // bond, the quantum levels of the periodic torsional potential, and their thermal terms.
 #pragma once
 
+#include <limits>
+#include <string_view>
 #include <vector>
 
 #include "vibtherm/partition.hpp"
@@ -49,14 +51,34 @@ struct TorsionLevels {
   std::vector<double> energies_J_per_mol;    // above the ground level
   double zero_point_energy_J_per_mol = 0.0;  // ground level − V_min
   int basis_max_m = 0;
+  // The level sum is converged up to this temperature (hindered_rotor_terms refuses a
+  // higher one); an explicit basis (torsion_levels_in_basis) is the caller's choice: ∞.
+  double max_temperature_K = std::numeric_limits<double>::infinity();
 };
 
-// M is chosen so that B M² ≥ (V_max − V_min) + 1e5 cm^-1 (levels up to e^{-29} of their
-// weight at 5000 K are then converged), but 20 ≤ M ≤ 800 (cost: the Hamiltonian splits
-// into blocks of m modulo the potential's period and is diagonalised per block).
-TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential);
+// The basis rule: the highest level kept must weigh less than this relative to the level
+// sum at the highest temperature asked (its levels are then far below the truncation).
+inline constexpr double rotor_top_level_weight = 1e-12;
+// The largest basis |m| ≤ M tried: about 1 s for one cosine term, σ = 3 (1000 amu Å²) on
+// this 2-core machine; σ = 1 at T_max = 3000 K reaches it near I = 5e4 amu Å². Several cosine or sine terms
+// (a scan) use a dense solver; with those, a block above max_rotor_dense_block functions is refused.
+inline constexpr int max_rotor_basis_m = 20000;
+inline constexpr int max_rotor_dense_block = 3000;
+
+// Levels converged at `max_temperature_K`: M starts where B M² reaches the potential's
+// range plus 40 RT_max (at least 20) and grows by half until the highest level kept weighs
+// less than rotor_top_level_weight at T_max. Reaching max_rotor_basis_m (or, for a scan,
+// max_rotor_dense_block), or a first estimate above twice it, throws InputError at `where`,
+// naming `rotor`, the reduced moment and T_max. Cost: the Hamiltonian splits into blocks of m modulo the
+// potential's period g, banded within a block; one cosine term gives real tridiagonal blocks (QR on the
+// tridiagonal, O(n²)), several cosine terms real dense blocks, sine terms complex ones;
+// without sine terms block g − r repeats block r (m → −m) and is not diagonalised again.
 TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential,
-                             int basis_max_m);
+                             double max_temperature_K, const SourceLocation& where = {},
+                             std::string_view rotor = "hindered rotor");
+// The same in a given basis |m| ≤ basis_max_m, without the convergence check.
+TorsionLevels torsion_levels_in_basis(double reduced_moment_amu_A2, const TorsionPotential& potential,
+                                      int basis_max_m);
 
 // Thermal terms from the level sum counted from the ground level, every level of the full
 // 2π ring summed and then divided by the internal symmetry number: ln q − ln σ_int
@@ -72,6 +94,8 @@ struct HinderedRotorModel {
   TorsionLevels levels;
 };
 
-HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRotor& rotor);
+// `max_temperature_K`: the highest temperature the rotor's terms will be evaluated at.
+HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRotor& rotor,
+                                        double max_temperature_K);
 
 }  // namespace vibtherm

@@ -35,6 +35,10 @@ struct ModelOptions {
   double linear_tolerance_amu_A2 = default_linear_tolerance_amu_A2;
   double symmetry_tolerance_angstrom = default_symmetry_tolerance_angstrom;  // point-group detection
   bool racemic = false;  // a chiral species as a racemic mixture: S + R ln 2 (optical isomers)
+  // The highest temperature the prepared species will be evaluated at: hindered-rotor level
+  // sums are converged up to it (at least 298.15 K) and refused above it. Each subcommand
+  // sets it from its temperatures and fit range; the default covers the default NASA-9 range.
+  double max_temperature_K = 6000.0;
 };
 
 struct ConformerMember;

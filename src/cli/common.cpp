@@ -115,6 +115,7 @@ ModelOptions model_options(const CommonOptions& o) {
   m.mode_count_mismatch_is_warning = o.mode_count_warning;
   m.symmetry_tolerance_angstrom = o.symmetry_tolerance_angstrom;
   m.racemic = o.racemic;
+  if (o.max_temperature_K > 0.0) m.max_temperature_K = o.max_temperature_K;
   check_model_options(m);
   return m;
 }

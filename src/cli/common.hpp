@@ -53,6 +53,9 @@ struct CommonOptions {
   unsigned jobs = 0;                             // 0: every core
   std::string method_file;                       // --method: for species without their own `method` key
   std::vector<std::string> formation_reactions;  // --formation-reactions: reaction files with `unknown`
+  // Set by the subcommand, not an option: the highest temperature it evaluates (table rows,
+  // fit range), so hindered-rotor bases are sized for it; 0 keeps ModelOptions' default.
+  double max_temperature_K = 0.0;
 };
 
 // ΔfH°(298.15 K) of species solved for by reaction files (--formation-reactions), keyed by

@@ -82,6 +82,7 @@ void setup_fit(CLI::App& sub) {
       fit.form = NasaForm::nasa9;
     fit.range = o->range.empty() ? default_fit_range(fit.form) : parse_fit_range(o->range, fit.form);
     fit.allow_missing_hf = o->allow_missing_hf;
+    o->common.max_temperature_K = fit.range.breakpoints_K.back();
     fit.Cp_slope_continuous = o->cp_slope;
     if (!(o->grid_step_K > 0.0))
       fail({}, fmt::format("--grid-step {}: expected a positive step in K", o->grid_step_K));

@@ -11,6 +11,8 @@ void setup_inspect(CLI::App& sub) {
   auto options = std::make_shared<CommonOptions>();
   add_common_options(sub, *options, false, {"text", "csv", "json"});
   sub.callback([options] {
+    // inspect evaluates at 298.15 K and gives conformer populations up to 1000 K.
+    options->max_temperature_K = 1000.0;
     const auto paths = batch_paths(*options);
     check_output_is_not_input(options->output, paths, "-o");
     OutputSet outputs;

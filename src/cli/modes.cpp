@@ -1,6 +1,7 @@
 // vibtherm modes: per-mode activation and effective quadratic degrees of freedom versus T.
 #include "vibtherm/modes.hpp"
 
+#include <algorithm>
 #include <memory>
 
 #include "common.hpp"
@@ -46,6 +47,7 @@ void setup_modes(CLI::App& sub) {
     const std::size_t out = outputs.add(options->output);
     const std::size_t svg = svg_path->empty() ? 0 : outputs.add(*svg_path);
     const auto [low, high] = svg_temperature_span_K(temps);
+    options->max_temperature_K = std::max(high, *std::max_element(temps.begin(), temps.end()));
     const auto samples = log_spaced_temperatures(low, high, svg_samples_per_species);
     std::vector<ModesReport> reports, dense;
     using Pair = std::pair<ModesReport, std::optional<ModesReport>>;

@@ -5,6 +5,7 @@
 #include <fmt/format.h>
 #include <spdlog/spdlog.h>
 
+#include <algorithm>
 #include <filesystem>
 #include <memory>
 
@@ -36,8 +37,9 @@ void setup_reaction(CLI::App& sub) {
   sub.add_flag("--fit-lnk", o->fit_ln_K,
                "fit ln K = ln A + n ln T - E/(RT) to Kp and Kc over the temperatures (at least three)");
   sub.callback([o] {
+    const auto temps = temperatures_or(o->common, default_table_temperatures());
+    o->common.max_temperature_K = *std::max_element(temps.begin(), temps.end());
     const CommonOptions& c = o->common;
-    const auto temps = temperatures_or(c, default_table_temperatures());
     const ModelOptions model = model_options(c);
     check_output_is_not_input(c.output, c.inputs, "-o");
     const ReactionFormations formations = formations_from_reactions(c, model);

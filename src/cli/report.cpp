@@ -4,12 +4,14 @@
 #include <fmt/format.h>
 #include <spdlog/spdlog.h>
 
+#include <algorithm>
 #include <iostream>
 #include <memory>
 
 #include "common.hpp"
 #include "vibtherm/checksum.hpp"
 #include "vibtherm/fit_advice.hpp"
+#include "vibtherm/write_modes_svg.hpp"
 #include "vibtherm/write_report.hpp"
 
 namespace vibtherm::cli {
@@ -54,6 +56,12 @@ void setup_report(CLI::App& sub) {
     report.fit.range =
         o->range.empty() ? default_fit_range(NasaForm::nasa7) : parse_fit_range(o->range, NasaForm::nasa7);
     report.fit.allow_missing_hf = o->allow_missing_hf;
+    // The pictures span the table temperatures and the fit range, widened to a decade.
+    std::vector<double> wanted = report.temperatures_K;
+    wanted.push_back(report.fit.range.breakpoints_K.front());
+    wanted.push_back(report.fit.range.breakpoints_K.back());
+    o->common.max_temperature_K =
+        std::max(svg_temperature_span_K(wanted).second, *std::max_element(wanted.begin(), wanted.end()));
 
     const auto paths = batch_paths(o->common);
     check_output_is_not_input(o->common.output, paths, "-o");

@@ -1,6 +1,7 @@
 // vibtherm table: thermodynamic functions versus temperature.
 #include <fmt/format.h>
 
+#include <algorithm>
 #include <memory>
 
 #include "common.hpp"
@@ -50,6 +51,7 @@ void setup_table(CLI::App& sub) {
                "add the per-motion contributions (translation, rotation, vibration, electronic)");
   sub.callback([options, breakdown] {
     const auto temps = temperatures_or(*options, default_table_temperatures());
+    options->max_temperature_K = *std::max_element(temps.begin(), temps.end());
     const auto paths = batch_paths(*options);
     check_output_is_not_input(options->output, paths, "-o");
     const std::string& f = options->format;

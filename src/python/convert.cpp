@@ -91,9 +91,13 @@ std::string yaml_flow(const py::handle& value, const std::string& key) {
 }  // namespace
 
 const std::vector<std::string>& model_option_names() {
-  static const std::vector<std::string> names = {
-      "standard_state",           "pressure", "scale", "transition_state", "imaginary_as_real_below",
-      "allow_mode_count_mismatch"};
+  static const std::vector<std::string> names = {"standard_state",
+                                                 "pressure",
+                                                 "scale",
+                                                 "transition_state",
+                                                 "imaginary_as_real_below",
+                                                 "allow_mode_count_mismatch",
+                                                 "max_temperature"};
   return names;
 }
 
@@ -119,6 +123,8 @@ ModelOptions model_options(const py::dict& keywords) {
       m.transition_state = value.cast<bool>();
     } else if (k == "imaginary_as_real_below") {
       m.imaginary_as_real_below_cm1 = finite_number(value, "imaginary_as_real_below");
+    } else if (k == "max_temperature") {
+      m.max_temperature_K = finite_number(value, "max_temperature");
     } else if (k == "allow_mode_count_mismatch") {
       m.mode_count_mismatch_is_warning = value.cast<bool>();
     } else if (k != "pressure") {
