@@ -38,6 +38,7 @@ SpeciesFacts describe_species(const PreparedSpecies& p) {
   f.ground_degeneracy = ground;
   f.warnings = p.warnings;
   f.notes = p.notes;
+  f.computed_with = p.species.computed_with;
   f.enthalpy_of_formation_J_per_mol = p.species.enthalpy_of_formation_J_per_mol;
   if (f.enthalpy_of_formation_J_per_mol)
     f.enthalpy_of_formation_route =

@@ -89,6 +89,7 @@ std::string inspect_text(const std::vector<SpeciesFacts>& all) {
                        i + 1, c.file, c.relative_energy_J_per_mol / 1e3, c.zero_point_energy_J_per_mol / 1e3,
                        c.level_J_per_mol / 1e3, pops));
     }
+    if (!f.computed_with.empty()) line("computed with", f.computed_with);
     for (const auto& w : f.warnings) line("warning", w);
     for (const auto& n : f.notes) line("note", n);
   }
@@ -161,6 +162,7 @@ std::string inspect_json(const std::vector<SpeciesFacts>& all) {
                                    {"level", c.level_J_per_mol / 1e3},
                                    {"populations", c.populations}});
     }
+    if (!f.computed_with.empty()) s["computed_with"] = f.computed_with;
     s["warnings"] = f.warnings;
     s["notes"] = f.notes;
     doc["species"].push_back(s);

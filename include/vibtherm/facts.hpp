@@ -44,6 +44,7 @@ struct SpeciesFacts {
   int ground_degeneracy = 1;
   std::vector<std::string> warnings;
   std::vector<std::string> notes;
+  std::string computed_with;                      // the QC exchange file's method/basis; empty: not recorded
   std::vector<double> population_temperatures_K;  // 298.15, 500, 1000 K for ensembles
   std::vector<ConformerFacts> conformers;
   std::optional<double> wigner_kappa_298;                 // transition states

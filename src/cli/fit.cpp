@@ -118,6 +118,8 @@ void setup_fit(CLI::App& sub) {
               {"symmetry_number", fmt::format("{}", p.species.symmetry_number.value_or(1))});
           if (p.point_group) species_options.push_back({"point_group", p.point_group->label});
           species_options.push_back({"racemic", p.racemic ? "true" : "false"});
+          if (!p.species.computed_with.empty())
+            species_options.push_back({"computed_with", p.species.computed_with});
           if (!p.conformers.empty())
             species_options.push_back({"conformers", fmt::format("{}", p.conformers.size())});
           return FitRecord{std::move(f), {in.path, sha256_hex(in.bytes), std::move(species_options)}};

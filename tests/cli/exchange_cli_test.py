@@ -48,6 +48,17 @@ def main():
         checks.check(f"{name}: Cp, H and S as the YAML's (σ = 2 detected)", ok, f"{ref} vs {rows}")
     checks.check("the detected symmetry number is said", "symmetry number 2 from the point group C2v" in stderr, stderr)
     checks.check("the dropped Molden entries are stated", "dropped 6 near-zero [FREQ] entries" in stderr, stderr)
+    # The QCSchema `model` (method/basis) is recorded: inspect's key and fit's provenance.
+    qc = str(data / "water-model-hessian.json")
+    result = checks.run("inspect", qc, "--format", "json")
+    facts = json.loads(result.stdout)["species"][0] if result.returncode == 0 else {}
+    checks.check("inspect records the QCSchema method/basis", facts.get("computed_with") == "model-force-field/none",
+                 result.stdout[-300:] + result.stderr)
+    result = checks.run("fit", qc, "--allow-missing-hf", "--form", "json")
+    provenance = json.loads(result.stdout)["species"][0]["provenance"] if result.returncode == 0 else {}
+    checks.check("fit's provenance records the QCSchema method/basis",
+                 provenance.get("model_options", {}).get("computed_with") == "model-force-field/none",
+                 json.dumps(provenance) + result.stderr)
     result = checks.run("table", str(root / "tests" / "bad" / "qcschema_gradient.json"))
     checks.check("a gradient result is refused in one line, exit 2",
                  result.returncode == 2 and len(result.stderr.strip().splitlines()) == 1, result.stderr)

@@ -13,7 +13,8 @@ namespace {
 
 void check_species(const vibtherm::Species& s) {
   if (s.name.empty() || s.atoms.empty()) __builtin_trap();
-  if (s.electronic_levels.empty() || s.electronic_levels[0].degeneracy < 1) __builtin_trap();
+  for (const vibtherm::ElectronicLevel& level : s.electronic_levels)  // may be empty: spin from electrons
+    if (level.degeneracy < 1 || !(level.energy_cm1 >= 0.0)) __builtin_trap();
   for (const vibtherm::Atom& a : s.atoms)
     if (!(a.mass_amu > 0.0) || !a.position_angstrom.allFinite()) __builtin_trap();
   if (s.hessian_J_per_m2) {
