@@ -10,6 +10,7 @@
 #include <string_view>
 
 #include "vibtherm/constants.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm {
 
@@ -249,6 +250,11 @@ MotionTerms hindered_rotor_terms(const TorsionLevels& levels, int symmetry, doub
 HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRotor& rotor) {
   HinderedRotorModel m;
   m.input = rotor;
+  // Checked here too for species built in code: a period above the basis' block count
+  // leaves empty blocks, and a huge one exhausts memory in the potential's series.
+  if (rotor.symmetry < 1 || rotor.symmetry > limits::max_rotor_symmetry)
+    fail(rotor.where, fmt::format("hindered rotor symmetry is {}, expected 1 to {}", rotor.symmetry,
+                                  limits::max_rotor_symmetry));
   const int a = rotor.bond_atoms[0], b = rotor.bond_atoms[1];
   m.top_atoms =
       rotor.top_atoms.empty() ? top_by_connectivity(species.atoms, a, b, rotor.where) : rotor.top_atoms;

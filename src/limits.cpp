@@ -58,6 +58,9 @@ void check_species(const Species& s) {
                 max_enthalpy_of_formation_J_per_mol / 1e3, who + "enthalpy of formation", "kJ/mol", at);
   for (const HinderedRotor& r : s.hindered_rotors) {
     const SourceLocation& rw = r.where.file.empty() ? at : r.where;
+    if (r.symmetry < 1 || r.symmetry > max_rotor_symmetry)
+      fail(rw, fmt::format("{}hindered rotor symmetry is {}, expected 1 to {}", who, r.symmetry,
+                           max_rotor_symmetry));
     if (r.barrier_J_per_mol)
       check_range(*r.barrier_J_per_mol / 1e3, 0.0, max_rotor_energy_J_per_mol / 1e3,
                   who + "hindered rotor barrier", "kJ/mol", rw);

@@ -10,6 +10,7 @@
 #include "vibtherm/constants.hpp"
 #include "vibtherm/elements.hpp"
 #include "vibtherm/hindered_rotor.hpp"
+#include "vibtherm/limits.hpp"
 #include "vibtherm/species_builder.hpp"
 #include "vibtherm/spelling.hpp"
 #include "vibtherm/units.hpp"
@@ -223,17 +224,28 @@ std::vector<HinderedRotor> SpeciesYamlValues::hindered_rotors(const YAML::Node& 
     if (!symmetry)
       error(item, which + " has no 'symmetry', expected the internal symmetry number (1, 2, 3, ...)");
     r.symmetry = positive_integer(*symmetry, which + " 'symmetry'");
+    if (r.symmetry > limits::max_rotor_symmetry)
+      error(*symmetry, fmt::format("{} 'symmetry' is {}, expected the period of the torsional potential, "
+                                   "1 to {} (real torsions have 1 to 6)",
+                                   which, r.symmetry, limits::max_rotor_symmetry));
     const YAML::Node* barrier = find(e, "barrier");
     const YAML::Node* scan = find(e, "scan");
     if (barrier && scan) error(e["scan"].key, which + " has both 'barrier' and 'scan', expected one of them");
     if (!barrier && !scan)
       error(item, which + " has neither 'barrier' nor 'scan', expected a barrier in kJ/mol or a scan");
     if (barrier) {
-      const double V = energy_J_per_mol(*barrier, which + " 'barrier'") / 1e3;
-      if (V < 0.0)
-        error(*barrier, which + " 'barrier' is " + quote(barrier->Scalar()) +
-                            ", expected a barrier height >= 0 in kJ/mol");
-      r.barrier_J_per_mol = V * 1e3;
+      // A bare number in kJ/mol or {value, unit}; the message quotes the number given,
+      // which for a map is its 'value' (a map has no scalar text of its own).
+      const double V = energy_J_per_mol(*barrier, which + " 'barrier'");
+      if (V < 0.0) {
+        YAML::Node given = *barrier;
+        if (barrier->IsMap())
+          for (auto it = barrier->begin(); it != barrier->end(); ++it)
+            if (it->first.IsScalar() && it->first.Scalar() == "value") given.reset(it->second);
+        error(given, which + " 'barrier' is " + quote(given.Scalar()) +
+                         ", expected a barrier height >= 0 (kJ/mol or {value, unit})");
+      }
+      r.barrier_J_per_mol = V;
     } else {
       // {value: [[degrees, E], ...], unit: U} gives the energies in another unit.
       YAML::Node points = *scan;
@@ -243,7 +255,7 @@ std::vector<HinderedRotor> SpeciesYamlValues::hindered_rotors(const YAML::Node& 
         const YAML::Node* list = find(se, "value") ? find(se, "value") : find(se, "values");
         if (!list)
           error(*scan, which + " 'scan' has no 'value', expected {value: [[degrees, E], ...], unit: U}");
-        points = *list;
+        points.reset(*list);  // reset, not =: assigning would overwrite the scan node itself
         if (const YAML::Node* unit = find(se, "unit")) {
           const std::string u = text(*unit, "'unit'");
           const std::optional<double> factor = to_energy_J_per_mol(1.0, u);

@@ -263,7 +263,7 @@ double YamlValues::energy_J_per_mol(const YAML::Node& node, const std::string& w
     v = number(*value, what);
     if (unit) {
       u = text(*unit, "'unit'");
-      at_node = *unit;
+      at_node.reset(*unit);  // reset, not =: assigning a Node overwrites the node it refers to
     }
   } else {
     v = number(node, what);  // bare number: kJ/mol for enthalpies (design.md section 4)

@@ -197,4 +197,12 @@ TEST_CASE("engine: the rotor replaces its torsion") {
   Species wrong = s;
   wrong.hindered_rotors[0].replaces_cm1 = 310.0;
   CHECK_THROWS_AS(prepare_species(wrong), InputError);
+
+  // A symmetry above limits::max_rotor_symmetry once crashed the solver (empty blocks) or
+  // exhausted memory (2147483647): refused by the builder too, for species built in code.
+  for (int sigma : {13, 200, 2147483647}) {
+    Species big = s;
+    big.hindered_rotors[0].symmetry = sigma;
+    CHECK_THROWS_WITH_AS(prepare_species(big), doctest::Contains("symmetry is"), InputError);
+  }
 }

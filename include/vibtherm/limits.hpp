@@ -29,6 +29,12 @@ inline constexpr double max_moment_amu_A2 = 1e12;
 inline constexpr double max_enthalpy_of_formation_J_per_mol = 1e8;  // |ΔfH°| ≤ 100,000 kJ/mol
 inline constexpr double max_rotor_energy_J_per_mol = 1e6;           // barrier and scan, 1000 kJ/mol
 inline constexpr int max_symmetry_number = 1000;
+// A hindered rotor's internal symmetry number, the period of its torsional potential: real
+// torsions have 1 to 6 (a methyl top 3, a C6 ring about its axis 6); 12 leaves room for a
+// symmetric top on a symmetric frame (3 × 4) while keeping every block of the level basis
+// (hindered_rotor.hpp) well filled. Above it the basis and the potential's series grow
+// with σ without bound.
+inline constexpr int max_rotor_symmetry = 12;
 inline constexpr double min_grid_step_K = 0.1;
 inline constexpr std::size_t max_grid_points = 200000;
 
