@@ -2,44 +2,17 @@
 
 #include <algorithm>
 
-#include "vibtherm/elements.hpp"
+#include "vibtherm/composition.hpp"
 
 namespace vibtherm {
-
-std::string hill_formula(const std::map<std::string, int>& formula) {
-  std::vector<std::string> order;
-  const bool has_carbon = formula.count("C") > 0;
-  if (has_carbon) {
-    order.push_back("C");
-    if (formula.count("H")) order.push_back("H");
-  }
-  for (const auto& [symbol, count] : formula)
-    if (!has_carbon || (symbol != "C" && symbol != "H")) order.push_back(symbol);
-  std::string out;
-  for (const auto& symbol : order) {
-    const int count = formula.at(symbol);
-    out += symbol;
-    if (count != 1) out += std::to_string(count);
-  }
-  return out;
-}
 
 SpeciesFacts describe_species(const PreparedSpecies& p) {
   SpeciesFacts f;
   f.name = p.species.name;
-  f.formula = hill_formula(p.species.formula);
+  f.formula = species_formula(p.species);
   f.mass_amu = p.rotor.mass_amu;
-  double molar_mass = 0.0;
-  bool known = !p.species.formula.empty();
-  for (const auto& [symbol, count] : p.species.formula) {
-    const auto element = find_element(symbol);
-    if (!element) {
-      known = false;
-      break;
-    }
-    molar_mass += count * element->standard_atomic_weight;
-  }
-  f.molar_mass_g_per_mol = known ? molar_mass : 0.0;
+  f.molar_mass_g_per_mol = species_molar_mass_g_per_mol(p.species);
+  f.isotope_labels = has_isotope_labels(p.species);
   f.rotor = p.rotor.type;
   f.moments_amu_A2 = p.rotor.moments_amu_A2;
   f.rotational_constants_cm1 = p.rotor.rotational_constants_cm1;

@@ -27,11 +27,10 @@
 #include <charconv>
 #include <cmath>
 #include <limits>
-#include <map>
 
 #include "fit_terms.hpp"
+#include "vibtherm/composition.hpp"
 #include "vibtherm/constants.hpp"
-#include "vibtherm/elements.hpp"
 #include "vibtherm/error.hpp"
 #include "vibtherm/fit_plan.hpp"
 #include "vibtherm/limits.hpp"
@@ -249,45 +248,6 @@ FitResult fit_samples(const FitInput& input, const FitPlan& plan) {
         x.T_from_K, x.T_to_K, x.worst_Cp_over_R, x.bound_over_R));
   }
   return result;
-}
-
-std::vector<ElementAmount> species_composition(const Species& species) {
-  std::map<std::string, double> counts;
-  if (!species.atoms.empty()) {
-    for (const Atom& a : species.atoms) {
-      const bool hydrogen_label = a.isotope == "D" || a.isotope == "T";
-      counts[hydrogen_label ? a.isotope : a.symbol] += 1.0;
-    }
-  } else {
-    for (const auto& [symbol, n] : species.formula) counts[symbol] += n;
-  }
-  if (!species.surface_site.empty()) counts[species.surface_site] += 1.0;
-  std::vector<ElementAmount> out;
-  for (const char* first : {"C", "H"}) {
-    auto it = counts.find(first);
-    if (it != counts.end()) {
-      out.push_back({it->first, it->second});
-      counts.erase(it);
-    }
-  }
-  for (const auto& [symbol, n] : counts) out.push_back({symbol, n});
-  return out;
-}
-
-double species_molar_mass_g_per_mol(const Species& species) {
-  double total = 0.0;
-  auto weight = [&](const std::string& symbol) {
-    const auto info = find_element(symbol);
-    if (!info)
-      fail(species.origin, fmt::format("unknown element '{}' in species '{}'", symbol, species.name));
-    return info->standard_atomic_weight;
-  };
-  if (!species.atoms.empty()) {
-    for (const Atom& a : species.atoms) total += a.isotope.empty() ? weight(a.symbol) : a.mass_amu;
-  } else {
-    for (const auto& [symbol, n] : species.formula) total += n * weight(symbol);
-  }
-  return total;  // amu per molecule = g/mol
 }
 
 SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& options) {

@@ -3,6 +3,7 @@
 
 #include <fmt/format.h>
 
+#include <algorithm>
 #include <filesystem>
 #include <fstream>
 #include <iterator>
@@ -73,6 +74,17 @@ Species read_species_file(const std::string& path, std::string* bytes) {
   Species species = read_species_text(text, path);
   check_size(species);
   if (bytes) *bytes = std::move(text);
+  return species;
+}
+
+Species read_species_source(const SpeciesSource& source, std::string* bytes) {
+  if (source.overlay.empty()) return read_species_file(source.path, bytes);
+  // Blank lines before it keep the reader's line numbers those of the manifest.
+  const std::string text =
+      std::string(static_cast<std::size_t>(std::max(source.line - 1, 0)), '\n') + source.overlay + '\n';
+  Species species = read_species_yaml(text, source.path);
+  check_size(species);
+  if (bytes) *bytes = source.overlay;
   return species;
 }
 

@@ -36,7 +36,7 @@ std::string too_many() {
 }
 
 void expand_one(const std::string& arg, const SourceLocation& where, int depth, Expansion& state,
-                std::vector<std::string>& out) {
+                std::vector<SpeciesSource>& out) {
   std::error_code ec;
   if (fs::is_directory(arg, ec)) {
     std::vector<std::string> found;
@@ -53,13 +53,13 @@ void expand_one(const std::string& arg, const SourceLocation& where, int depth, 
     std::sort(found.begin(), found.end());
     if (out.size() + found.size() > max_species_paths)
       fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where, too_many());
-    out.insert(out.end(), found.begin(), found.end());
+    for (std::string& f : found) out.push_back({std::move(f), {}, 0});
     return;
   }
   if (lowercase_extension(arg) != ".list") {
     if (out.size() >= max_species_paths)
       fail(where.file.empty() ? SourceLocation{arg, 0, 0} : where, too_many());
-    out.push_back(arg);
+    out.push_back({arg, {}, 0});
     return;
   }
   if (depth > max_manifest_depth)
@@ -85,6 +85,11 @@ void expand_one(const std::string& arg, const SourceLocation& where, int depth, 
   fs::path base = fs::path(arg).parent_path();
   open.push_back(key);
   for (const ManifestEntry& entry : entries) {
+    if (entry.overlay) {
+      if (out.size() >= max_species_paths) fail(entry.where, too_many());
+      out.push_back({arg, entry.path, entry.where.line});
+      continue;
+    }
     fs::path path(entry.path);
     if (path.is_relative()) path = base / path;
     if (!fs::exists(path, ec)) fail(entry.where, "listed file " + quote(entry.path) + " does not exist");
@@ -95,8 +100,18 @@ void expand_one(const std::string& arg, const SourceLocation& where, int depth, 
 
 }  // namespace
 
-std::vector<std::string> expand_species_paths(const std::vector<std::string>& args) {
+std::string SpeciesSource::label() const {
+  return overlay.empty() ? path : path + ":" + std::to_string(line);
+}
+
+std::vector<std::string> source_paths(const std::vector<SpeciesSource>& sources) {
   std::vector<std::string> out;
+  for (const SpeciesSource& s : sources) out.push_back(s.path);
+  return out;
+}
+
+std::vector<SpeciesSource> expand_species_paths(const std::vector<std::string>& args) {
+  std::vector<SpeciesSource> out;
   Expansion state;
   for (const std::string& arg : args) expand_one(arg, {}, 0, state, out);
   return out;
@@ -110,7 +125,10 @@ std::vector<ManifestEntry> parse_manifest(const std::string& text, const std::st
   int line_number = 0;
   while (std::getline(lines, line)) {
     ++line_number;
-    std::size_t hash = line.find('#');
+    // An inline species keeps its line whole (YAML reads its comments and quoted '#').
+    const std::size_t start = line.find_first_not_of(" \t\r");
+    const bool overlay = start != std::string::npos && line[start] == '{';
+    std::size_t hash = overlay ? std::string::npos : line.find('#');
     if (hash != std::string::npos) line.erase(hash);
     std::size_t first = line.find_first_not_of(" \t\r");
     if (first == std::string::npos) continue;
@@ -118,6 +136,11 @@ std::vector<ManifestEntry> parse_manifest(const std::string& text, const std::st
     if (out.size() >= max_species_paths)
       fail({file_name, line_number, 1},
            "manifest lists more than " + std::to_string(max_species_paths) + " files, expected fewer");
+    if (overlay) {
+      if (!line.empty() && line.back() == '\r') line.pop_back();
+      out.push_back({line, {file_name, line_number, static_cast<int>(first) + 1}, true});
+      continue;
+    }
     out.push_back(
         {line.substr(first, last - first + 1), {file_name, line_number, static_cast<int>(first) + 1}});
   }

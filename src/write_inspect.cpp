@@ -42,11 +42,14 @@ std::string inspect_text(const std::vector<SpeciesFacts>& all) {
     };
     line("formula", f.formula.empty() ? "-" : f.formula);
     line("phase", f.phase);
-    line("mass",
-         fmt::format("{:.6f} amu (isotopic){}", f.mass_amu,
-                     f.molar_mass_g_per_mol > 0
-                         ? fmt::format(", {:.4f} g/mol (standard atomic weights)", f.molar_mass_g_per_mol)
-                         : std::string()));
+    line("mass", fmt::format("{:.6f} amu (isotopic){}", f.mass_amu,
+                             f.molar_mass_g_per_mol > 0
+                                 ? fmt::format(", {:.4f} g/mol ({})", f.molar_mass_g_per_mol,
+                                               f.isotope_labels
+                                                   ? "isotope masses for labelled atoms, standard atomic "
+                                                     "weights otherwise"
+                                                   : "standard atomic weights")
+                                 : std::string()));
     // An adsorbate neither translates nor rotates: its rotor facts would mean nothing.
     if (f.phase != "adsorbate") {
       line("rotor", rotor_type_name(f.rotor));

@@ -142,7 +142,9 @@ void facts_list(std::string& out, const ReportSpecies& s) {
   }
   fact(out, "formula", f.formula.empty() ? "unknown" : f.formula);
   if (f.molar_mass_g_per_mol > 0)
-    fact(out, "molar mass", fmt::format("{:.4f} g/mol", f.molar_mass_g_per_mol));
+    fact(out, "molar mass",
+         fmt::format("{:.4f} g/mol{}", f.molar_mass_g_per_mol,
+                     f.isotope_labels ? " (isotope masses for labelled atoms)" : ""));
   fact(out, "phase", f.phase);
   // An adsorbate neither translates nor rotates: no rotor type, moments or constants.
   if (f.phase != "adsorbate") {

@@ -255,27 +255,6 @@ TEST_CASE("round trip through NASA-7 and NASA-9 text against the engine") {
   }
 }
 
-TEST_CASE("composition and molar mass") {
-  const auto comp = species_composition(test::carbon_dioxide());
-  REQUIRE(comp.size() == 2);
-  CHECK(comp[0].symbol == "C");
-  CHECK(comp[1].symbol == "O");
-  CHECK(comp[1].count == 2.0);
-  // Standard atomic weights C 12.011, O 15.999 (IUPAC/CIAAW conventional values, common practice).
-  CHECK(species_molar_mass_g_per_mol(test::carbon_dioxide()) ==
-        doctest::Approx(12.011 + 2 * 15.999).epsilon(1e-6));
-  Species d2o = test::water();
-  for (auto& a : d2o.atoms)
-    if (a.symbol == "H") {
-      a.isotope = "D";
-      a.mass_amu = 2.01410177812;  // AME2020 (Wang et al. 2021), from memory
-    }
-  const auto dcomp = species_composition(d2o);
-  REQUIRE(dcomp.size() == 2);
-  CHECK(dcomp[0].symbol == "D");
-  CHECK(dcomp[1].symbol == "O");
-}
-
 TEST_CASE("adsorbate writes phase S and has a zero lower bound") {
   Species s = test::water();
   s.phase = Phase::adsorbate;

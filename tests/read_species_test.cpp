@@ -242,11 +242,12 @@ TEST_CASE("reading files and expanding paths") {
   fs::create_directories(dir / "set");
   for (const char* name : {"b.yaml", "a.xyz", "c.YML", "notes.txt"}) std::ofstream(dir / "set" / name) << "x";
   std::ofstream(dir / "batch.list") << "# two species\nset/a.xyz\n\n  set/b.yaml  # trailing comment\n";
-  std::vector<std::string> from_dir = expand_species_paths({(dir / "set").string()});
+  std::vector<std::string> from_dir = source_paths(expand_species_paths({(dir / "set").string()}));
   CHECK(from_dir == std::vector<std::string>{(dir / "set" / "a.xyz").string(),
                                              (dir / "set" / "b.yaml").string(),
                                              (dir / "set" / "c.YML").string()});
-  std::vector<std::string> from_list = expand_species_paths({(dir / "batch.list").string(), "plain.yaml"});
+  std::vector<std::string> from_list =
+      source_paths(expand_species_paths({(dir / "batch.list").string(), "plain.yaml"}));
   CHECK(from_list == std::vector<std::string>{(dir / "set" / "a.xyz").string(),
                                               (dir / "set" / "b.yaml").string(), "plain.yaml"});
   std::ofstream(dir / "bad.list") << "set/a.xyz\nset/missing.yaml\n";
@@ -420,4 +421,28 @@ TEST_CASE("YAML: electronic_energy, method and bonds") {
         std::string::npos);
   CHECK(yaml_error(base + "electronic_energy: {value: 1, unit: Eh}\n").find("unknown energy unit 'Eh'") !=
         std::string::npos);
+}
+
+TEST_CASE("a manifest line may be an inline species: a from: overlay with its own keys") {
+  namespace fs = std::filesystem;
+  const fs::path dir = fs::temp_directory_path() / "vibtherm_inline_manifest_test";
+  fs::remove_all(dir);
+  fs::create_directories(dir);
+  std::ofstream(dir / "argon.yaml") << "name: Ar\natoms: [[Ar, 0, 0, 0]]\n";
+  std::ofstream(dir / "set.list") << "argon.yaml\n# comment\n  {name: argon-2, atoms: [[Ar, 0, 0, 0]], "
+                                     "enthalpy_of_formation: 1.5}  # inline\n{name: x, atoms: oops}\n";
+  const std::vector<SpeciesSource> sources = expand_species_paths({(dir / "set.list").string()});
+  REQUIRE(sources.size() == 3);
+  CHECK(sources[0].overlay.empty());
+  CHECK(sources[1].line == 3);
+  CHECK(sources[1].label() == (dir / "set.list").string() + ":3");
+  std::string bytes;
+  const Species inline_species = read_species_source(sources[1], &bytes);
+  CHECK(inline_species.name == "argon-2");
+  CHECK(inline_species.enthalpy_of_formation_J_per_mol == doctest::Approx(1500.0));
+  CHECK(bytes.find("argon-2") != std::string::npos);
+  // Its errors carry the manifest's line and the column within it.
+  const std::string located = (dir / "set.list").string() + ":4:";
+  CHECK_THROWS_WITH_AS(read_species_source(sources[2]), doctest::Contains(located.c_str()), InputError);
+  fs::remove_all(dir);
 }

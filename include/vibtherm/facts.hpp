@@ -21,9 +21,10 @@ struct ConformerFacts {
 
 struct SpeciesFacts {
   std::string name;
-  std::string formula;                // Hill order, e.g. "CH4O"; empty when unknown
+  std::string formula;                // composition.hpp: Hill order with isotope labels, e.g. "CH4O", "D2O"
   double mass_amu = 0.0;              // isotopic mass used by the model
-  double molar_mass_g_per_mol = 0.0;  // from standard atomic weights (0 when unknown)
+  double molar_mass_g_per_mol = 0.0;  // composition.hpp: isotope masses for labelled atoms (0 when unknown)
+  bool isotope_labels = false;        // some atom carries an isotope label
   RotorType rotor = RotorType::atom;
   std::array<double, 3> moments_amu_A2{};
   std::vector<double> rotational_constants_cm1;
@@ -53,9 +54,5 @@ struct SpeciesFacts {
 };
 
 SpeciesFacts describe_species(const PreparedSpecies& prepared);
-
-// Hill-order formula string from an element → count map (C first, then H, then
-// alphabetical; alphabetical throughout when there is no carbon).
-std::string hill_formula(const std::map<std::string, int>& formula);
 
 }  // namespace vibtherm

@@ -131,9 +131,4 @@ struct SpeciesFit {
 // when enthalpy_of_formation is missing and options.allow_missing_hf is false.
 SpeciesFit fit_species(const PreparedSpecies& prepared, const FitOptions& options);
 
-// Element counts in writing order (C, H, then alphabetical; isotopes D and T by label).
-std::vector<ElementAmount> species_composition(const Species& species);
-// Molar mass with standard atomic weights (isotope masses for labelled isotopes).
-double species_molar_mass_g_per_mol(const Species& species);
-
 }  // namespace vibtherm

@@ -28,6 +28,11 @@ Species read_species_file(const std::string& path, std::string* bytes = nullptr)
 // The same for a text already read; `path` names it in errors and decides by extension.
 Species read_species_text(const std::string& text, const std::string& path);
 
+// Reads a species source: a file (as read_species_file), or a manifest's inline species (its
+// line read as YAML at its line and columns, paths relative to the manifest; `bytes` gets
+// the line).
+Species read_species_source(const SpeciesSource& source, std::string* bytes = nullptr);
+
 // Reads a QC exchange file (QCSchema JSON or Molden normal modes) named by a species file's
 // `from:`: its vibrations may be missing, the species file then gives them. Other formats
 // are refused.

@@ -24,15 +24,32 @@ inline constexpr int max_manifest_depth = 16;
 inline constexpr std::size_t max_species_paths = 1000000;
 inline constexpr std::size_t max_manifests = 10000;  // manifest files read in one run
 
+// One species to read: a file, or a manifest line that is an inline YAML species in flow
+// style (`{from: water.json, symmetry_number: 2}`), read like a species file standing where
+// the manifest stands, with the manifest's line and columns in its errors.
+struct SpeciesSource {
+  std::string path;     // the species file; for an inline species, the manifest holding it
+  std::string overlay;  // the manifest line of an inline species (empty: the whole file)
+  int line = 0;         // that line (1-based)
+  // What names it in messages and provenance: the path, or "MANIFEST:LINE".
+  std::string label() const;
+};
+
 // Expands the command-line arguments: files as given, directories to their species
 // files (sorted by name, not recursive), manifests (*.list: one path per line, relative
-// to the manifest, '#' comments) to the files they list.
-std::vector<std::string> expand_species_paths(const std::vector<std::string>& args);
+// to the manifest, '#' comments; or a line starting with '{', an inline species) to what
+// they list.
+std::vector<SpeciesSource> expand_species_paths(const std::vector<std::string>& args);
 
-// One line of a manifest: the path as written and where it stands.
+// The file paths of sources (an inline species gives its manifest).
+std::vector<std::string> source_paths(const std::vector<SpeciesSource>& sources);
+
+// One line of a manifest: the path as written (or the whole line of an inline species,
+// `overlay` set) and where it stands.
 struct ManifestEntry {
   std::string path;
   SourceLocation where;
+  bool overlay = false;
 };
 // The entries of a manifest's text (no file system access); InputError when it lists none.
 std::vector<ManifestEntry> parse_manifest(const std::string& text, const std::string& file_name);

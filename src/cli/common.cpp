@@ -137,15 +137,15 @@ void add_jobs_option(CLI::App& sub, unsigned& jobs) {
 
 unsigned thread_count(unsigned jobs) { return jobs == 0 ? default_thread_count() : jobs; }
 
-std::vector<std::string> batch_paths(const CommonOptions& o) { return expand_species_paths(o.inputs); }
+std::vector<SpeciesSource> batch_paths(const CommonOptions& o) { return expand_species_paths(o.inputs); }
 
 void emit_log(const std::vector<LogLine>& log) {
   for (const auto& line : log) spdlog::log(line.level, "{}", line.text);
 }
 
-PreparedSpecies read_and_prepare(const std::string& path, const ModelOptions& model,
+PreparedSpecies read_and_prepare(const SpeciesSource& source, const ModelOptions& model,
                                  const std::string& method_file, std::string* bytes) {
-  const Species species = read_species_file(path, bytes);
+  const Species species = read_species_source(source, bytes);
   const std::string& method_path = species.method_file.empty() ? method_file : species.method_file;
   std::optional<Method> method;
   if (!method_path.empty()) method = read_method_file(method_path);
@@ -158,7 +158,7 @@ Reaction load_reaction(const ReactionFile& file, const ModelOptions& model, cons
   r.name = file.name;
   r.origin = file.origin;
   for (const auto& term : file.terms) {
-    PreparedSpecies p = read_and_prepare(term.path, model, method_file);
+    PreparedSpecies p = read_and_prepare({term.path, {}, 0}, model, method_file);
     if (formations) {
       std::error_code ec;
       const auto it = formations->find(std::filesystem::weakly_canonical(term.path, ec).string());
@@ -200,15 +200,16 @@ ReactionFormations formations_from_reactions(const CommonOptions& o, const Model
   return out;
 }
 
-std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
+std::optional<InputError> run_species(const SpeciesSource& source, const ModelOptions& model,
                                       const RawProducer& work, std::vector<LogLine>& log,
                                       const std::string& method_file, const ReactionFormations* formations) {
+  const std::string path = source.label();
   try {
     std::string bytes;
-    PreparedSpecies p = read_and_prepare(path, model, method_file, &bytes);
-    if (formations && !formations->empty()) {
+    PreparedSpecies p = read_and_prepare(source, model, method_file, &bytes);
+    if (formations && !formations->empty() && source.overlay.empty()) {
       std::error_code ec;
-      const auto it = formations->find(std::filesystem::weakly_canonical(path, ec).string());
+      const auto it = formations->find(std::filesystem::weakly_canonical(source.path, ec).string());
       if (it != formations->end()) apply_reaction_formation(p, it->second.dfH298_J_per_mol, it->second.route);
     }
     for (const auto& w : p.warnings)
@@ -217,7 +218,7 @@ std::optional<InputError> run_species(const std::string& path, const ModelOption
       log.push_back({spdlog::level::info, fmt::format("{}: {}", p.species.name, n)});
     work(SpeciesInput{path, bytes, p}, log);
   } catch (const InputError& e) {
-    if (e.where().file.empty()) return InputError({path, 0, 0}, e.message());
+    if (e.where().file.empty()) return InputError({source.path, source.line, 0}, e.message());
     return e;
   }
   return std::nullopt;
@@ -350,6 +351,11 @@ void check_output_is_not_input(const std::string& output, const std::vector<std:
       fail({output, 0, 0},
            fmt::format("{} names the input file '{}', expected a different output file", what, input));
   }
+}
+
+void check_output_is_not_input(const std::string& output, const std::vector<SpeciesSource>& inputs,
+                               const std::string& what) {
+  check_output_is_not_input(output, source_paths(inputs), what);
 }
 
 void write_output(const std::string& path, const std::string& content) {

@@ -17,6 +17,7 @@
 #include "vibtherm/ordered_map.hpp"
 #include "vibtherm/reaction.hpp"
 #include "vibtherm/read_reaction.hpp"
+#include "vibtherm/species_paths.hpp"
 #include "vibtherm/thermo.hpp"
 
 namespace vibtherm::cli {
@@ -108,6 +109,8 @@ class OutputSet {
 // path): `what` is the option, e.g. "-o".
 void check_output_is_not_input(const std::string& output, const std::vector<std::string>& inputs,
                                const std::string& what);
+void check_output_is_not_input(const std::string& output, const std::vector<SpeciesSource>& inputs,
+                               const std::string& what);
 
 // Writes `content` to `path` ("-" = stdout) through a temporary file renamed into place.
 void write_output(const std::string& path, const std::string& content);
@@ -142,7 +145,7 @@ struct BatchSummary {
 using RawProducer = std::function<void(const SpeciesInput&, std::vector<LogLine>&)>;
 // Reads a species file and prepares it, under its own `method` file or else `method_file`
 // (--method, may be empty); `bytes` receives the file's content when given.
-PreparedSpecies read_and_prepare(const std::string& path, const ModelOptions& model,
+PreparedSpecies read_and_prepare(const SpeciesSource& source, const ModelOptions& model,
                                  const std::string& method_file, std::string* bytes = nullptr);
 
 // The species files of a reaction file, read and prepared (their warnings logged once each).
@@ -154,7 +157,7 @@ Reaction load_reaction(const ReactionFile& file, const ModelOptions& model, cons
 ReactionFormations formations_from_reactions(const CommonOptions& options, const ModelOptions& model);
 
 // `method_file` (--method) applies to species without a `method` key of their own.
-std::optional<InputError> run_species(const std::string& path, const ModelOptions& model,
+std::optional<InputError> run_species(const SpeciesSource& source, const ModelOptions& model,
                                       const RawProducer& work, std::vector<LogLine>& log,
                                       const std::string& method_file = "",
                                       const ReactionFormations* formations = nullptr);
@@ -165,7 +168,7 @@ void emit_log(const std::vector<LogLine>& log);
 // by the thread count). Without --keep-going the first error in input order propagates as
 // InputError; with it, failures are printed and collected.
 template <class Piece>
-BatchSummary for_each_species(const CommonOptions& o, const std::vector<std::string>& paths,
+BatchSummary for_each_species(const CommonOptions& o, const std::vector<SpeciesSource>& paths,
                               const std::function<Piece(const SpeciesInput&, std::vector<LogLine>&)>& work,
                               const std::function<void(Piece&)>& consume) {
   const ModelOptions model = model_options(o);
@@ -196,7 +199,7 @@ BatchSummary for_each_species(const CommonOptions& o, const std::vector<std::str
 }
 
 // The species files of the batch (expanded arguments).
-std::vector<std::string> batch_paths(const CommonOptions& options);
+std::vector<SpeciesSource> batch_paths(const CommonOptions& options);
 
 // Ends the subcommand: exit_some_failed if the batch had failures, else exit_ok. With
 // failures and no species done, the outputs are not replaced (an empty file would hide

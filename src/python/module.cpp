@@ -190,7 +190,7 @@ PYBIND11_MODULE(vibtherm, m) {
         else
           for (const auto& p : paths) args.push_back(py::str(p).cast<std::string>());
         std::vector<Species> out;
-        for (const auto& path : expand_species_paths(args)) out.push_back(read_species_file(path));
+        for (const auto& source : expand_species_paths(args)) out.push_back(read_species_source(source));
         return out;
       },
       py::arg("path"),

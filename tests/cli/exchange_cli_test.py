@@ -8,7 +8,9 @@ Usage: exchange_cli_test.py VIBTHERM_EXECUTABLE REPO_ROOT
 import json
 import math
 import pathlib
+import shutil
 import sys
+import tempfile
 
 from harness import Checks
 
@@ -59,6 +61,26 @@ def main():
     checks.check("fit's provenance records the QCSchema method/basis",
                  provenance.get("model_options", {}).get("computed_with") == "model-force-field/none",
                  json.dumps(provenance) + result.stderr)
+    # A manifest line may be an inline species: `from:` plus overrides, errors at its line and column.
+    with tempfile.TemporaryDirectory() as tmp:
+        shutil.copy(qc, tmp)
+        manifest = pathlib.Path(tmp) / "set.list"
+        manifest.write_text("water-model-hessian.json\n"
+                            "{from: water-model-hessian.json, name: heavy, isotopes: {2: D, 3: D}}  # D2O\n")
+        result = checks.run("inspect", str(manifest), "--format", "json")
+        names = [s["name"] for s in json.loads(result.stdout)["species"]] if result.returncode == 0 else []
+        checks.check("a manifest's inline species is read with its overrides", names == ["water-model-hessian", "heavy"],
+                     result.stderr)
+        result = checks.run("fit", str(manifest), "--allow-missing-hf", "--form", "json")
+        files = [s["provenance"]["input_file"] for s in json.loads(result.stdout)["species"]] \
+            if result.returncode == 0 else []
+        checks.check("its provenance names the manifest line", len(files) == 2 and files[1].endswith("set.list:2"),
+                     str(files) + result.stderr)
+        manifest.write_text("water-model-hessian.json\n{from: water-model-hessian.json, symmetry_number: zero}\n")
+        result = checks.run("inspect", str(manifest))
+        checks.check("an inline species' error is located in the manifest", result.returncode == 2 and
+                     result.stderr.strip().endswith("expected a positive whole number") and
+                     f"{manifest}:2:" in result.stderr, result.stderr)
     result = checks.run("table", str(root / "tests" / "bad" / "qcschema_gradient.json"))
     checks.check("a gradient result is refused in one line, exit 2",
                  result.returncode == 2 and len(result.stderr.strip().splitlines()) == 1, result.stderr)
