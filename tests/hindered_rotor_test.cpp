@@ -290,7 +290,7 @@ TEST_CASE("rotor basis: the cap is a located error, and the levels refuse a high
   // 1e6 amu Å² at 3000 K needs |m| of about 7e4 (B M² ≈ 40 RT): above max_rotor_basis_m.
   CHECK_THROWS_WITH_AS(torsion_levels(1e6, v, 3000.0, {"x.yaml", 4, 5}, "hindered rotor about atoms 1-2"),
                        "x.yaml:4:5: error: hindered rotor about atoms 1-2: the level sum at 3000 K is not "
-                       "converged in the largest basis |m| <= 20000 (reduced moment 1e+06 amu A^2), expected "
+                       "converged in the largest basis |m| <= 10000 (reduced moment 1e+06 amu A^2), expected "
                        "a lower highest temperature or a lighter top",
                        InputError);
   const TorsionLevels levels = torsion_levels(1.5, v, 1000.0);

@@ -59,10 +59,11 @@ struct TorsionLevels {
 // The basis rule: the highest level kept must weigh less than this relative to the level
 // sum at the highest temperature asked (its levels are then far below the truncation).
 inline constexpr double rotor_top_level_weight = 1e-12;
-// The largest basis |m| ≤ M tried: about 1 s for one cosine term, σ = 3 (1000 amu Å²) on
-// this 2-core machine; σ = 1 at T_max = 3000 K reaches it near I = 5e4 amu Å². Several cosine or sine terms
+// The largest basis |m| ≤ M tried: about 3 s for one cosine term, σ = 3 (the tridiagonal
+// QR is O(n²): 14 s at 20000) on a 2-core machine; σ = 1 at T_max = 3000 K reaches it near
+// I = 2e4 amu Å². Several cosine or sine terms
 // (a scan) use a dense solver; with those, a block above max_rotor_dense_block functions is refused.
-inline constexpr int max_rotor_basis_m = 20000;
+inline constexpr int max_rotor_basis_m = 10000;
 inline constexpr int max_rotor_dense_block = 3000;
 
 // Levels converged at `max_temperature_K`: M starts where B M² reaches the potential's
