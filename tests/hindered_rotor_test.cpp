@@ -98,6 +98,19 @@ TEST_CASE("reduced moment of two identical tops is half of one top's moment") {
         doctest::Approx(1.5 * test::mass_H1).epsilon(1e-12));
 }
 
+namespace {
+
+// A rotor with a cosine barrier about 0-based atoms `bond`.
+HinderedRotor cosine_rotor(std::array<int, 2> bond, int symmetry, double barrier_J_per_mol,
+                           double replaces_cm1) {
+  HinderedRotor r;
+  r.bond_atoms = bond;
+  r.symmetry = symmetry;
+  r.barrier_J_per_mol = barrier_J_per_mol;
+  r.replaces_cm1 = replaces_cm1;
+  return r;
+}
+
 // Methanol, staggered, as in examples/fuel-additive/methanol.yaml (structure approximately
 // r(CO) 1.427, r(OH) 0.956, r(CH) 1.094 Å, COH 108.5°; microwave structure, from memory).
 std::vector<Atom> methanol() {
@@ -144,6 +157,8 @@ double projected_moment(const std::vector<Atom>& atoms, int a, int b, const std:
       Eigen::HouseholderQR<Eigen::MatrixXd>(external).householderQ() * Eigen::MatrixXd::Identity(n, 6);
   return (turn - Q * (Q.transpose() * turn)).squaredNorm();
 }
+
+}  // namespace
 
 TEST_CASE("coupled reduced moment: equal to the bond-axis one for symmetric tops") {
   const std::vector<Atom> atoms = ethane_like();
@@ -328,12 +343,7 @@ TEST_CASE("engine: the rotor replaces its torsion") {
   // Test wavenumbers (not measured): 18 modes, the torsion at 300.
   s.frequencies_cm1 = {300,  800,  800,  1000, 1200, 1200, 1400, 1400, 1400,
                        1450, 1450, 1450, 1450, 2900, 2950, 2950, 3000, 3000};
-  HinderedRotor r;
-  r.bond_atoms = {0, 1};
-  r.symmetry = 3;
-  r.barrier_J_per_mol = 12e3;
-  r.replaces_cm1 = 300.4;
-  s.hindered_rotors = {r};
+  s.hindered_rotors = {cosine_rotor({0, 1}, 3, 12e3, 300.4)};
   const PreparedSpecies harmonic = prepare_species([&] {
     Species h = s;
     h.hindered_rotors.clear();
@@ -379,12 +389,7 @@ TEST_CASE("engine: methanol's OH rotor with the coupled and the bond-axis moment
   // from memory, rounded); the 295 cm^-1 torsion becomes the rotor. A low test barrier
   // (0.5 kJ/mol) keeps the rotor near its free limit.
   s.frequencies_cm1 = {3681, 3000, 2844, 1477, 1455, 1345, 1060, 1033, 2960, 1477, 1165, 295};
-  HinderedRotor r;
-  r.bond_atoms = {1, 0};
-  r.symmetry = 3;
-  r.barrier_J_per_mol = 500.0;
-  r.replaces_cm1 = 295.0;
-  s.hindered_rotors = {r};
+  s.hindered_rotors = {cosine_rotor({1, 0}, 3, 500.0, 295.0)};
   const PreparedSpecies coupled = prepare_species(s);
   s.hindered_rotors[0].moment = RotorMoment::bond_axis;
   const PreparedSpecies bond_axis = prepare_species(s);
