@@ -32,6 +32,18 @@ ARGUMENT_CASES = [
      "error: temperature list '1e-320': 9.99989e-321 K is outside 1 to 100000 K"),
     (["../data/water.yaml", "--scale", "1e-320"], "error: frequency scale factor is 9.99989e-321, expected 0.1 to 10"),
     (["../data/water.yaml", "--pressure", "1e-30Pa"], "error: pressure is 1e-30, expected 1e-06 to 1e+09 Pa"),
+    # Per-quantity scale factors and low-frequency wavenumbers are bounded too (1e308 gave an
+    # infinite ZPE, 1e-320 a NaN Cp).
+    (["../data/water.yaml", "--scale-zpe", "1e308"],
+     "../data/water.yaml: error: frequency scale factor for the zero-point energy is 1e+308, expected 0.1 to 10"),
+    (["../data/water.yaml", "--scale-entropy", "1e-320"],
+     "../data/water.yaml: error: frequency scale factor for the entropy is 9.99989e-321, expected 0.1 to 10"),
+    (["../data/water.yaml", "--low-freq", "qrrho", "--qrrho-omega0", "1e308"],
+     "error: the qRRHO reference wavenumber (--qrrho-omega0) is 1e+308, expected 0.01 to 100000 cm^-1"),
+    (["../data/water.yaml", "--low-freq", "floor", "--low-freq-floor", "1e-320"],
+     "error: the wavenumber floor (--low-freq-floor) is 9.99989e-321, expected 0.01 to 100000 cm^-1"),
+    (["../data/water.yaml", "--soft-mode-warning", "1e308"],
+     "error: the soft-mode warning threshold (--soft-mode-warning) is 1e+308, expected 0 to 100000 cm^-1"),
     (["/dev/zero"], "/dev/zero: error: is not a regular file (a device, FIFO or socket), expected a species file"),
     (["does-not-exist.yaml"],
      "does-not-exist.yaml: error: cannot read file (missing or not readable), expected a species file"),
