@@ -219,6 +219,49 @@ TorsionLevels torsion_levels_in_basis(double reduced_moment_amu_A2, const Torsio
     has_sine = has_sine || potential.sin_J_per_mol[uk] != 0.0;
     cosine_terms += potential.cos_J_per_mol[uk] != 0.0 ? 1 : 0;
   }
+  const auto throw_unconverged = [&](Eigen::Index n) {
+    fail({}, fmt::format("the eigenvalue solver did not converge on a block of {} rotor basis functions "
+                         "(|m| <= {}), expected converged levels",
+                         n, basis_max_m));
+  };
+  // <m|B m² + V|m'> of the real part of V (cos kφ = (e^{ikφ} + e^{−ikφ})/2).
+  const auto element = [&](int m, int mp) {
+    const int k = std::abs(m - mp);
+    if (k == 0) return B_J_per_mol * double(m) * double(m) + potential.cos_J_per_mol[0];
+    return k <= K ? 0.5 * potential.cos_J_per_mol[static_cast<std::size_t>(k)] : 0.0;
+  };
+  // Eigenvalues of the real symmetric matrix h(i, j) over basis functions i, j < n: a
+  // tridiagonal QR with one cosine term (consecutive functions differ by g), else dense.
+  const auto real_levels = [&](Eigen::Index n, const auto& h, std::vector<double>& out) {
+    if (n == 0) return;
+    if (n == 1) {
+      out.push_back(h(0, 0));
+      return;
+    }
+    Eigen::SelfAdjointEigenSolver<Eigen::MatrixXd> solver;
+    double scale = 1.0;
+    if (cosine_terms <= 1) {
+      Eigen::VectorXd d(n), e(n - 1);
+      for (Eigen::Index i = 0; i < n; ++i) d(i) = h(i, i);
+      for (Eigen::Index i = 0; i + 1 < n; ++i) e(i) = h(i + 1, i);
+      // Scaled to entries of at most 1 first, as Eigen's compute() does: unscaled, the QR
+      // of Eigen 3.4 fails to converge for about 1 in 60 rotors (its deflation test) and
+      // leaves wrong eigenvalues (reported only through info()).
+      scale = std::max(d.cwiseAbs().maxCoeff(), e.size() ? e.cwiseAbs().maxCoeff() : 0.0);
+      if (!(scale > 0.0)) scale = 1.0;
+      d /= scale;
+      e /= scale;
+      solver.computeFromTridiagonal(d, e, Eigen::EigenvaluesOnly);
+    } else {
+      Eigen::MatrixXd H = Eigen::MatrixXd::Zero(n, n);
+      for (Eigen::Index i = 0; i < n; ++i)
+        for (Eigen::Index j = std::max<Eigen::Index>(0, i - band); j < std::min(n, i + band + 1); ++j)
+          H(i, j) = h(i, j);
+      solver.compute(H, Eigen::EigenvaluesOnly);
+    }
+    if (solver.info() != Eigen::Success) throw_unconverged(n);
+    for (Eigen::Index i = 0; i < n; ++i) out.push_back(scale * solver.eigenvalues()(i));
+  };
   std::vector<std::vector<double>> blocks(static_cast<std::size_t>(g));
   for (int r = 0; r < g; ++r) {
     std::vector<double>& out = blocks[static_cast<std::size_t>(r)];
@@ -236,38 +279,43 @@ TorsionLevels torsion_levels_in_basis(double reduced_moment_amu_A2, const Torsio
     if ((has_sine || cosine_terms > 1) && n > max_rotor_dense_block)
       fail({}, fmt::format("a block of {} basis functions exceeds the dense solver's {}", n,
                            max_rotor_dense_block));
-    const auto diagonal = [&](Eigen::Index i) {
-      const double m = ms[static_cast<std::size_t>(i)];
-      return B_J_per_mol * m * m + potential.cos_J_per_mol[0];
-    };
-    if (!has_sine && cosine_terms <= 1) {
-      // One cosine term (k = g): <m|V|m ± g> = cos_g / 2, a real tridiagonal block.
-      Eigen::VectorXd d(n);
-      Eigen::VectorXd e = Eigen::VectorXd::Constant(
-          std::max<Eigen::Index>(n - 1, 0), 0.5 * potential.cos_J_per_mol[static_cast<std::size_t>(g)]);
-      for (Eigen::Index i = 0; i < n; ++i) d(i) = diagonal(i);
-      if (n == 1) {
-        out.push_back(d(0));
-        continue;
+    if (!has_sine && (r == 0 || 2 * r == g)) {
+      // The block maps onto itself under m → −m: even functions (|m> + |−m>)/√2 (and |0>)
+      // and odd ones (|m> − |−m>)/√2, m > 0, do not mix; two half-size problems. With
+      // c(0) = 1/√2, c(m > 0) = 1: <even m|H|even m'> = c(m) c(m') (H(m, m') + H(m, −m')),
+      // <odd m|H|odd m'> = H(m, m') − H(m, −m').
+      std::vector<int> even, odd;
+      for (int m : ms) {
+        if (m >= 0) even.push_back(m);
+        if (m > 0) odd.push_back(m);
       }
-      Eigen::SelfAdjointEigenSolver<Eigen::MatrixXd> solver;
-      solver.computeFromTridiagonal(d, e, Eigen::EigenvaluesOnly);
-      for (Eigen::Index i = 0; i < n; ++i) out.push_back(solver.eigenvalues()(i));
+      const auto c = [](int m) { return m == 0 ? 1.0 / std::sqrt(2.0) : 1.0; };
+      real_levels(
+          static_cast<Eigen::Index>(even.size()),
+          [&](Eigen::Index i, Eigen::Index j) {
+            const int m = even[static_cast<std::size_t>(i)], mp = even[static_cast<std::size_t>(j)];
+            return c(m) * c(mp) * (element(m, mp) + element(m, -mp));
+          },
+          out);
+      real_levels(
+          static_cast<Eigen::Index>(odd.size()),
+          [&](Eigen::Index i, Eigen::Index j) {
+            const int m = odd[static_cast<std::size_t>(i)], mp = odd[static_cast<std::size_t>(j)];
+            return element(m, mp) - element(m, -mp);
+          },
+          out);
     } else if (!has_sine) {
-      // Several cosine terms: real symmetric (cos kφ = (e^{ikφ} + e^{−ikφ})/2).
-      Eigen::MatrixXd H = Eigen::MatrixXd::Zero(n, n);
-      for (Eigen::Index i = 0; i < n; ++i) {
-        H(i, i) = diagonal(i);
-        for (Eigen::Index j = std::max<Eigen::Index>(0, i - band); j < std::min(n, i + band + 1); ++j)
-          if (j != i) H(i, j) = 0.5 * potential.cos_J_per_mol[static_cast<std::size_t>(std::abs(i - j) * g)];
-      }
-      Eigen::SelfAdjointEigenSolver<Eigen::MatrixXd> solver(H, Eigen::EigenvaluesOnly);
-      for (Eigen::Index i = 0; i < n; ++i) out.push_back(solver.eigenvalues()(i));
+      real_levels(
+          n,
+          [&](Eigen::Index i, Eigen::Index j) {
+            return element(ms[static_cast<std::size_t>(i)], ms[static_cast<std::size_t>(j)]);
+          },
+          out);
     } else {
       // Sine terms: complex Hermitian, sin kφ = (e^{ikφ} − e^{−ikφ})/(2i).
       Eigen::MatrixXcd H = Eigen::MatrixXcd::Zero(n, n);
       for (Eigen::Index i = 0; i < n; ++i) {
-        H(i, i) = diagonal(i);
+        H(i, i) = element(ms[static_cast<std::size_t>(i)], ms[static_cast<std::size_t>(i)]);
         for (Eigen::Index j = std::max<Eigen::Index>(0, i - band); j < std::min(n, i + band + 1); ++j) {
           const int k = ms[static_cast<std::size_t>(i)] - ms[static_cast<std::size_t>(j)];  // <m_i|V|m_j>
           if (k == 0) continue;
@@ -278,6 +326,7 @@ TorsionLevels torsion_levels_in_basis(double reduced_moment_amu_A2, const Torsio
         }
       }
       Eigen::SelfAdjointEigenSolver<Eigen::MatrixXcd> solver(H, Eigen::EigenvaluesOnly);
+      if (solver.info() != Eigen::Success) throw_unconverged(n);
       for (Eigen::Index i = 0; i < n; ++i) out.push_back(solver.eigenvalues()(i));
     }
   }
@@ -303,6 +352,9 @@ MotionTerms hindered_rotor_terms(const TorsionLevels& levels, int symmetry, doub
   double q = 0.0, e1 = 0.0, e2 = 0.0;
   for (double e : levels.energies_J_per_mol) {
     const double x = e / RT;
+    // Levels ascend: past x = 60 every weight is below e^-60 = 9e-27 of the ground
+    // level's (and x² e^-x < 4e-23), far below double precision of the sums.
+    if (x > 60.0) break;
     const double w = std::exp(-x);
     q += w;
     e1 += w * x;

@@ -68,7 +68,9 @@ inline constexpr int max_rotor_dense_block = 3000;
 // naming `rotor`, the reduced moment and T_max. Cost: the Hamiltonian splits into blocks of m modulo the
 // potential's period g, banded within a block; one cosine term gives real tridiagonal blocks (QR on the
 // tridiagonal, O(n²)), several cosine terms real dense blocks, sine terms complex ones;
-// without sine terms block g − r repeats block r (m → −m) and is not diagonalised again.
+// without sine terms block g − r repeats block r (m → −m) and is not diagonalised again,
+// and the blocks that map onto themselves (r = 0, r = g/2) split into even and odd halves.
+// A solver that does not converge is an error, never a silent level list.
 TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential,
                              double max_temperature_K, const SourceLocation& where = {},
                              std::string_view rotor = "hindered rotor");
