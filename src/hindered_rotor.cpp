@@ -16,78 +16,6 @@ namespace vibtherm {
 
 namespace c = constants;
 
-double TorsionPotential::value_J_per_mol(double phi_rad) const {
-  double v = cos_J_per_mol[0];
-  for (std::size_t k = 1; k < cos_J_per_mol.size(); ++k) {
-    const double kd = static_cast<double>(k);
-    v += cos_J_per_mol[k] * std::cos(kd * phi_rad) + sin_J_per_mol[k] * std::sin(kd * phi_rad);
-  }
-  return v;
-}
-
-double TorsionPotential::minimum_J_per_mol() const {
-  double lowest = value_J_per_mol(0.0);
-  for (int i = 1; i < 7200; ++i) lowest = std::min(lowest, value_J_per_mol(2.0 * c::pi * i / 7200.0));
-  return lowest;
-}
-
-TorsionPotential cosine_barrier(double barrier_J_per_mol, int symmetry) {
-  TorsionPotential v;
-  v.cos_J_per_mol.assign(static_cast<std::size_t>(symmetry) + 1, 0.0);
-  v.sin_J_per_mol.assign(static_cast<std::size_t>(symmetry) + 1, 0.0);
-  v.cos_J_per_mol[0] = 0.5 * barrier_J_per_mol;
-  v.cos_J_per_mol[static_cast<std::size_t>(symmetry)] = -0.5 * barrier_J_per_mol;
-  return v;
-}
-
-TorsionPotential fit_scan(const std::vector<ScanPoint>& scan, int symmetry, const SourceLocation& where) {
-  const double period_deg = 360.0 / symmetry;
-  std::vector<double> reduced;
-  for (const ScanPoint& p : scan) {
-    double a = std::fmod(p.angle_deg, period_deg);
-    if (a < 0.0) a += period_deg;
-    reduced.push_back(a);
-  }
-  std::vector<double> sorted = reduced;
-  std::sort(sorted.begin(), sorted.end());
-  // Angles 1e-6 degree apart count as one (0 and 360/σ fold onto each other).
-  std::vector<double> distinct;
-  for (double a : sorted)
-    if (distinct.empty() || a - distinct.back() > 1e-6) distinct.push_back(a);
-  if (distinct.size() > 1 && distinct.front() + period_deg - distinct.back() <= 1e-6) distinct.pop_back();
-  double widest = distinct.empty() ? period_deg : distinct.front() + period_deg - distinct.back();
-  for (std::size_t i = 1; i < distinct.size(); ++i) widest = std::max(widest, distinct[i] - distinct[i - 1]);
-  if (distinct.size() < 3 || widest > period_deg / 4.0 + 1e-9)
-    fail(where,
-         fmt::format("'scan' has {} distinct angles modulo {:g} deg with a gap of {:g} deg, expected "
-                     "points over a whole period 0-{:g} deg (360/symmetry) with no gap wider than {:g} deg",
-                     distinct.size(), period_deg, widest, period_deg, period_deg / 4.0));
-  const int order = std::min(6, static_cast<int>(distinct.size() - 1) / 2);
-  const Eigen::Index rows = static_cast<Eigen::Index>(scan.size());
-  Eigen::MatrixXd A(rows, 1 + 2 * order);
-  Eigen::VectorXd b(rows);
-  for (Eigen::Index i = 0; i < rows; ++i) {
-    const double phi = scan[static_cast<std::size_t>(i)].angle_deg * c::pi / 180.0;
-    A(i, 0) = 1.0;
-    for (int k = 1; k <= order; ++k) {
-      A(i, 2 * k - 1) = std::cos(k * symmetry * phi);
-      A(i, 2 * k) = std::sin(k * symmetry * phi);
-    }
-    b(i) = scan[static_cast<std::size_t>(i)].energy_J_per_mol;
-  }
-  const Eigen::VectorXd x = A.colPivHouseholderQr().solve(b);
-  TorsionPotential v;
-  const std::size_t size = static_cast<std::size_t>(order * symmetry) + 1;
-  v.cos_J_per_mol.assign(size, 0.0);
-  v.sin_J_per_mol.assign(size, 0.0);
-  v.cos_J_per_mol[0] = x(0);
-  for (int k = 1; k <= order; ++k) {
-    v.cos_J_per_mol[static_cast<std::size_t>(k * symmetry)] = x(2 * k - 1);
-    v.sin_J_per_mol[static_cast<std::size_t>(k * symmetry)] = x(2 * k);
-  }
-  return v;
-}
-
 namespace {
 
 // Single-bond covalent radii in ångström, Cordero et al., Dalton Trans. 2008, 2832 (from
@@ -159,6 +87,44 @@ double reduced_moment_amu_A2(const std::vector<Atom>& atoms, int atom_a, int ato
   }
   if (!(I_A > 0.0) || !(I_B > 0.0)) return 0.0;
   return I_A * I_B / (I_A + I_B);
+}
+
+double coupled_reduced_moment_amu_A2(const std::vector<Atom>& atoms, int atom_a, int atom_b,
+                                     const std::vector<int>& top_a) {
+  const Eigen::Vector3d origin = atoms[static_cast<std::size_t>(atom_a)].position_angstrom;
+  const Eigen::Vector3d axis =
+      (atoms[static_cast<std::size_t>(atom_b)].position_angstrom - origin).normalized();
+  double M = 0.0;
+  Eigen::Vector3d centre = Eigen::Vector3d::Zero();
+  for (const Atom& a : atoms) {
+    M += a.mass_amu;
+    centre += a.mass_amu * a.position_angstrom;
+  }
+  centre /= M;
+  Eigen::Matrix3d inertia = Eigen::Matrix3d::Zero();
+  for (const Atom& a : atoms) {
+    const Eigen::Vector3d r = a.position_angstrom - centre;
+    inertia += a.mass_amu * (r.squaredNorm() * Eigen::Matrix3d::Identity() - r * r.transpose());
+  }
+  double A = 0.0;
+  Eigen::Vector3d momentum = Eigen::Vector3d::Zero(), angular = Eigen::Vector3d::Zero();
+  for (int i : top_a) {
+    const Atom& a = atoms[static_cast<std::size_t>(i)];
+    const Eigen::Vector3d u = axis.cross(a.position_angstrom - origin);  // velocity per unit dφ/dt
+    A += a.mass_amu * u.squaredNorm();
+    momentum += a.mass_amu * u;
+    angular += a.mass_amu * (a.position_angstrom - centre).cross(u);
+  }
+  // Lᵀ I⁻¹ L over the principal axes; a vanishing principal moment (a linear frame) carries
+  // no rotation to couple to.
+  const Eigen::SelfAdjointEigenSolver<Eigen::Matrix3d> principal(inertia);
+  const double largest = principal.eigenvalues().maxCoeff();
+  double coupling = 0.0;
+  for (int k = 0; k < 3; ++k)
+    if (principal.eigenvalues()(k) > 1e-10 * largest)
+      coupling += std::pow(principal.eigenvectors().col(k).dot(angular), 2) / principal.eigenvalues()(k);
+  const double I_red = A - momentum.squaredNorm() / M - coupling;
+  return I_red > 1e-12 * A ? I_red : 0.0;
 }
 
 namespace {
@@ -365,14 +331,26 @@ HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRo
   const int a = rotor.bond_atoms[0], b = rotor.bond_atoms[1];
   m.top_atoms =
       rotor.top_atoms.empty() ? top_by_connectivity(species.atoms, a, b, rotor.where) : rotor.top_atoms;
-  m.reduced_moment_amu_A2 = reduced_moment_amu_A2(species.atoms, a, b, m.top_atoms);
-  if (!(m.reduced_moment_amu_A2 > 0.0))
+  m.bond_axis_moment_amu_A2 = reduced_moment_amu_A2(species.atoms, a, b, m.top_atoms);
+  m.reduced_moment_amu_A2 = rotor.moment == RotorMoment::coupled
+                                ? coupled_reduced_moment_amu_A2(species.atoms, a, b, m.top_atoms)
+                                : m.bond_axis_moment_amu_A2;
+  if (!(m.bond_axis_moment_amu_A2 > 0.0))
     fail(rotor.where,
          fmt::format("the rotor about atoms {} and {} has a top with no moment about the bond axis, "
                      "expected atoms off the axis on both sides",
                      a + 1, b + 1));
-  m.potential = rotor.barrier_J_per_mol ? cosine_barrier(*rotor.barrier_J_per_mol, rotor.symmetry)
-                                        : fit_scan(rotor.scan, rotor.symmetry, rotor.where);
+  if (!(m.reduced_moment_amu_A2 > 0.0))
+    fail(rotor.where, fmt::format("the rotor about atoms {} and {} has no coupled reduced moment left once "
+                                  "the overall rotation is removed, expected a top that turns "
+                                  "independently of the frame (or 'moment: bond_axis')",
+                                  a + 1, b + 1));
+  if (rotor.barrier_J_per_mol)
+    m.potential = cosine_barrier(*rotor.barrier_J_per_mol, rotor.symmetry);
+  else {
+    m.scan_fit = fit_scan(rotor.scan, rotor.symmetry, rotor.where);
+    m.potential = m.scan_fit->potential;
+  }
   m.levels = torsion_levels(m.reduced_moment_amu_A2, m.potential, max_temperature_K, rotor.where,
                             fmt::format("hindered rotor about atoms {}-{}", a + 1, b + 1));
   return m;

@@ -7,6 +7,7 @@
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/error.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm {
 
@@ -29,14 +30,15 @@ void check_low_frequency_options(const LowFrequencyOptions& o) {
     if (!(value > 0.0) || !std::isfinite(value))
       fail({}, fmt::format("{} must be a positive finite number, got {}", what, value));
   };
-  check(o.qrrho_omega0_cm1, "the qRRHO reference wavenumber (--qrrho-omega0, cm^-1)");
   check(o.qrrho_exponent, "the qRRHO damping exponent");
   check(o.qrrho_average_moment_kg_m2, "the qRRHO average moment of inertia");
-  check(o.floor_cm1, "the wavenumber floor (--low-freq-floor, cm^-1)");
-  if (!(o.soft_mode_warning_below_cm1 >= 0.0) || !std::isfinite(o.soft_mode_warning_below_cm1))
-    fail({}, fmt::format("the soft-mode warning threshold (--soft-mode-warning, cm^-1) must be zero or "
-                         "positive, got {}",
-                         o.soft_mode_warning_below_cm1));
+  // Wavenumbers within the range accepted for vibrations (limits.hpp).
+  limits::check_range(o.qrrho_omega0_cm1, limits::min_wavenumber_cm1, limits::max_wavenumber_cm1,
+                      "the qRRHO reference wavenumber (--qrrho-omega0)", "cm^-1");
+  limits::check_range(o.floor_cm1, limits::min_wavenumber_cm1, limits::max_wavenumber_cm1,
+                      "the wavenumber floor (--low-freq-floor)", "cm^-1");
+  limits::check_range(o.soft_mode_warning_below_cm1, 0.0, limits::max_wavenumber_cm1,
+                      "the soft-mode warning threshold (--soft-mode-warning)", "cm^-1");
 }
 
 double qrrho_weight(double wavenumber_cm1, double omega0_cm1, double exponent) {

@@ -7,6 +7,7 @@
 #include <cmath>
 
 #include "nasa_text.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm::nasa_text {
 
@@ -183,11 +184,13 @@ Nasa7 read_nasa7_record(Cursor& cur, double default_T_mid_K) {
     sp.T_mid_K =
         std::clamp(default_T_mid_K, std::min(sp.T_low_K, sp.T_high_K), std::max(sp.T_low_K, sp.T_high_K));
   }
-  if (!(sp.T_low_K > 0 && sp.T_high_K > 0 && sp.T_mid_K > 0))
+  if (!within_temperature_limits({sp.T_low_K, sp.T_mid_K, sp.T_high_K}))
     cur.fail_at(
         l1, 46,
-        fmt::format("species '{}': temperatures T_low {:g}, T_mid {:g}, T_high {:g} K must be positive",
-                    sp.name, sp.T_low_K, sp.T_mid_K, sp.T_high_K));
+        fmt::format("species '{}': temperatures T_low {:g}, T_mid {:g}, T_high {:g} K, expected {:g} to "
+                    "{:g} K",
+                    sp.name, sp.T_low_K, sp.T_mid_K, sp.T_high_K, limits::min_temperature_K,
+                    limits::max_temperature_K));
 
   if (continued) {
     ++cur.i;

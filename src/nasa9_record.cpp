@@ -7,6 +7,7 @@
 #include <cmath>
 
 #include "nasa_text.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm::nasa_text {
 
@@ -79,6 +80,16 @@ std::optional<Nasa9> read_nasa9_record(Cursor& cur) {
                 fmt::format("species '{}': expected phase (cols 51-52), molecular weight (53-65) and "
                             "enthalpy of formation (66-80)",
                             sp.name));
+  // The electron's molar mass, 5.5e-4 g/mol, is in the published database: no lower bound.
+  if (!(*mw >= 0 && *mw <= limits::max_mass_amu))
+    cur.fail_at(r2, 53,
+                fmt::format("species '{}': molecular weight {:g}, expected 0 to {:g} g/mol", sp.name, *mw,
+                            limits::max_mass_amu));
+  if (!(std::abs(*hf) <= limits::max_enthalpy_of_formation_J_per_mol))
+    cur.fail_at(
+        r2, 66,
+        fmt::format("species '{}': enthalpy of formation {:g} J/mol, expected at most {:g} in magnitude",
+                    sp.name, *hf, limits::max_enthalpy_of_formation_J_per_mol));
   sp.phase = static_cast<int>(*phase);
   sp.molar_mass_g_per_mol = *mw;
   sp.enthalpy_of_formation_J_per_mol = *hf;
@@ -127,7 +138,14 @@ std::optional<Nasa9> read_nasa9_record(Cursor& cur) {
             fmt::format("species '{}': interval {}: T exponents must be -2 -1 0 1 2 3 4, found {:g} at "
                         "position {}",
                         sp.name, r + 1, nums[3 + k].value, k + 1));
-    if (r == 0 && nums.size() >= 11) sp.H298_minus_H0_J_per_mol = nums.back().value;
+    if (r == 0 && nums.size() >= 11) {
+      sp.H298_minus_H0_J_per_mol = nums.back().value;
+      if (!(std::abs(sp.H298_minus_H0_J_per_mol) <= limits::max_enthalpy_of_formation_J_per_mol))
+        cur.fail_at(
+            tl, nums.back().column,
+            fmt::format("species '{}': H(298.15 K) - H(0) {:g} J/mol, expected at most {:g} in magnitude",
+                        sp.name, sp.H298_minus_H0_J_per_mol, limits::max_enthalpy_of_formation_J_per_mol));
+    }
     std::vector<double> v;
     for (int part = 0; part < 2; ++part) {
       ++cur.i;
@@ -156,13 +174,15 @@ std::optional<Nasa9> read_nasa9_record(Cursor& cur) {
     std::copy(v.begin(), v.begin() + 7, range.a.begin());
     range.b1 = v[7];
     range.b2 = v[8];
-    if (!(range.T_low_K > 0 && range.T_high_K > 0) ||
-        (!sp.ranges.empty() && std::abs(range.T_low_K - sp.ranges.back().T_high_K) > 1e-6))
-      cur.fail_at(
-          tl, 1,
-          fmt::format("species '{}': interval {} ({:g}-{:g} K) is not positive and contiguous with the "
-                      "one before",
-                      sp.name, r + 1, range.T_low_K, range.T_high_K));
+    if (!within_temperature_limits({range.T_low_K, range.T_high_K}))
+      cur.fail_at(tl, 1,
+                  fmt::format("species '{}': interval {} ({:g}-{:g} K), expected temperatures {:g} to {:g} K",
+                              sp.name, r + 1, range.T_low_K, range.T_high_K, limits::min_temperature_K,
+                              limits::max_temperature_K));
+    if (!sp.ranges.empty() && std::abs(range.T_low_K - sp.ranges.back().T_high_K) > 1e-6)
+      cur.fail_at(tl, 1,
+                  fmt::format("species '{}': interval {} ({:g}-{:g} K) is not contiguous with the one before",
+                              sp.name, r + 1, range.T_low_K, range.T_high_K));
     sp.ranges.push_back(range);
   }
   ++cur.i;

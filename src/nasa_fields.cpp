@@ -8,6 +8,7 @@
 
 #include "nasa_text.hpp"
 #include "vibtherm/error.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm::nasa_text {
 
@@ -140,6 +141,12 @@ void check_coefficients(const Cursor& cur, const Line& line, const std::vector<d
       cur.fail_at(line, 1,
                   fmt::format("species '{}': coefficient {:g} is out of range (at most {:g} in magnitude)",
                               name, v, max_coefficient_magnitude));
+}
+
+bool within_temperature_limits(std::initializer_list<double> temperatures_K) {
+  return std::all_of(temperatures_K.begin(), temperatures_K.end(), [](double T) {
+    return T >= limits::min_temperature_K && T <= limits::max_temperature_K;
+  });
 }
 
 bool is_nasa9_second_record(const std::string& s) {

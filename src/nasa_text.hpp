@@ -3,6 +3,7 @@
 #pragma once
 
 #include <cstddef>
+#include <initializer_list>
 #include <optional>
 #include <string>
 #include <string_view>
@@ -60,6 +61,9 @@ struct Cursor {
 // Coefficients beyond ±1e30 (published ones stay below 1e10 in magnitude) would overflow
 // the evaluation; they are an error at `line`.
 inline constexpr double max_coefficient_magnitude = 1e30;
+// True when every temperature is finite and within limits.hpp's 1 to 1e5 K: a record's
+// ranges beyond them (T_high 1e300) would be evaluated to inf by the plausibility checks.
+bool within_temperature_limits(std::initializer_list<double> temperatures_K);
 void check_coefficients(const Cursor& cursor, const Line& line, const std::vector<double>& values,
                         const std::string& name);
 

@@ -4,6 +4,7 @@
 
 #include <algorithm>
 #include <cctype>
+#include <filesystem>
 #include <fstream>
 #include <sstream>
 #include <unordered_map>
@@ -281,8 +282,18 @@ NasaFile read_nasa_records(const std::string& text, const std::string& file_name
 }
 
 NasaFile read_nasa_records_file(const std::string& path) {
+  namespace fs = std::filesystem;
+  std::error_code ec;
+  const fs::file_status status = fs::status(path, ec);
+  if (fs::is_directory(status)) fail({path, 0, 0}, "is a directory, expected a NASA polynomial file");
+  if (fs::exists(status) && !fs::is_regular_file(status))
+    fail({path, 0, 0}, "is not a regular file (a device, FIFO or socket), expected a NASA polynomial file");
   std::ifstream in(path, std::ios::binary);
   if (!in) fail({path, 0, 0}, "cannot open the file for reading");
+  const auto size = fs::file_size(path, ec);
+  if (!ec && size > max_nasa_file_bytes)
+    fail({path, 0, 0}, fmt::format("file has {} bytes, more than the {} MiB a NASA polynomial file may have",
+                                   size, max_nasa_file_bytes >> 20));
   std::ostringstream ss;
   ss << in.rdbuf();
   return read_nasa_records(ss.str(), path);

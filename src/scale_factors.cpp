@@ -5,6 +5,7 @@
 #include <cmath>
 
 #include "vibtherm/error.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm {
 
@@ -13,10 +14,11 @@ ResolvedScaleFactors resolve_scale_factors(const ScaleFactors& command_line, con
   const auto pick = [&](const std::optional<double>& cli, const std::optional<double>& file,
                         const char* what) {
     const double f = cli ? *cli : file ? *file : one_for_all;
-    if (!(f > 0.0) || !std::isfinite(f))
-      fail(
-          cli || !file ? SourceLocation{} : where,
-          fmt::format("frequency scale factor for the {} must be a positive finite number, got {}", what, f));
+    // The bounds of --scale (limits.hpp): 1e308 once gave an infinite ZPE, 1e-320 a NaN Cp.
+    if (!(f >= limits::min_frequency_scale && f <= limits::max_frequency_scale))
+      fail(cli || !file ? SourceLocation{} : where,
+           fmt::format("frequency scale factor for the {} is {:g}, expected {:g} to {:g}", what, f,
+                       limits::min_frequency_scale, limits::max_frequency_scale));
     return f;
   };
   ResolvedScaleFactors r;

@@ -29,6 +29,7 @@ namespace {
 struct Expansion {
   std::vector<std::string> open;  // the manifests being expanded, outermost first
   std::size_t manifests_read = 0;
+  std::vector<std::string>* manifests = nullptr;  // when set, receives each manifest read
 };
 
 std::string too_many() {
@@ -83,6 +84,9 @@ void expand_one(const std::string& arg, const SourceLocation& where, int depth, 
   buffer << in.rdbuf();
   const std::vector<ManifestEntry> entries = parse_manifest(buffer.str(), arg);
   fs::path base = fs::path(arg).parent_path();
+  if (state.manifests &&
+      std::find(state.manifests->begin(), state.manifests->end(), arg) == state.manifests->end())
+    state.manifests->push_back(arg);
   open.push_back(key);
   for (const ManifestEntry& entry : entries) {
     if (entry.overlay) {
@@ -115,6 +119,15 @@ std::vector<SpeciesSource> expand_species_paths(const std::vector<std::string>& 
   Expansion state;
   for (const std::string& arg : args) expand_one(arg, {}, 0, state, out);
   return out;
+}
+
+std::vector<std::string> manifest_paths(const std::vector<std::string>& args) {
+  std::vector<SpeciesSource> sources;
+  std::vector<std::string> manifests;
+  Expansion state;
+  state.manifests = &manifests;
+  for (const std::string& arg : args) expand_one(arg, {}, 0, state, sources);
+  return manifests;
 }
 
 std::vector<ManifestEntry> parse_manifest(const std::string& text, const std::string& file_name) {

@@ -165,12 +165,23 @@ void replace_torsions(PreparedSpecies& p) {
     taken[best] = 1;
     p.hindered_rotors.push_back(build_hindered_rotor(
         s, r, std::max(p.options.max_temperature_K, constants::reference_temperature_K)));
-    p.notes.push_back(
-        fmt::format("hindered rotor about atoms {}-{} (symmetry {}, reduced moment {:.3f} amu A^2) replaces "
-                    "the mode at {:.1f} "
-                    "cm^-1",
-                    r.bond_atoms[0] + 1, r.bond_atoms[1] + 1, r.symmetry,
-                    p.hindered_rotors.back().reduced_moment_amu_A2, p.vibrations_cm1[best]));
+    const HinderedRotorModel& model = p.hindered_rotors.back();
+    p.notes.push_back(fmt::format(
+        "hindered rotor about atoms {}-{} (symmetry {}, reduced moment {:.4f} amu A^2 {}) replaces the mode "
+        "at {:.1f} cm^-1",
+        r.bond_atoms[0] + 1, r.bond_atoms[1] + 1, r.symmetry, model.reduced_moment_amu_A2,
+        r.moment == RotorMoment::coupled
+            ? fmt::format("coupled to the overall rotation; {:.4f} about the bond axis alone",
+                          model.bond_axis_moment_amu_A2)
+            : std::string("about the bond axis, I_A I_B/(I_A + I_B)"),
+        p.vibrations_cm1[best]));
+    if (model.scan_fit) {
+      const std::string rotor =
+          fmt::format("hindered rotor about atoms {}-{}", r.bond_atoms[0] + 1, r.bond_atoms[1] + 1);
+      p.notes.push_back(scan_fit_note(*model.scan_fit, r.scan.size(), rotor));
+      for (std::string& w : scan_fit_warnings(*model.scan_fit, r.symmetry, rotor))
+        p.warnings.push_back(std::move(w));
+    }
   }
   std::vector<double> kept;
   for (std::size_t i = 0; i < p.vibrations_cm1.size(); ++i)
@@ -320,6 +331,12 @@ class Evaluator {
 PreparedSpecies prepare_ensemble(const Species& species, const ModelOptions& options) {
   std::vector<ConformerMember> members;
   for (const Conformer& c : species.conformers) {
+    // 1e308 kJ/mol once gave NaN weights; a relative energy stays within the rotor bound.
+    limits::check_range(
+        c.relative_energy_J_per_mol / 1e3, -limits::max_conformer_energy_J_per_mol / 1e3,
+        limits::max_conformer_energy_J_per_mol / 1e3,
+        fmt::format("conformer {} ('{}') relative energy", members.size() + 1, limits::display_name(c.file)),
+        "kJ/mol", c.where.file.empty() ? species.origin : c.where);
     Species s = c.species;
     if (!s.low_frequency) s.low_frequency = species.low_frequency;
     if (s.scale.empty()) s.scale = species.scale;

@@ -208,7 +208,7 @@ std::vector<HinderedRotor> SpeciesYamlValues::hindered_rotors(const YAML::Node& 
     if (!item.IsMap())
       error(item, which + " is " + describe(item) +
                       ", expected {bond: [i, j], symmetry, barrier or scan, replaces}");
-    Entries e = entries(item, which, {"bond", "symmetry", "barrier", "scan", "replaces", "top"});
+    Entries e = entries(item, which, {"bond", "symmetry", "barrier", "scan", "replaces", "top", "moment"});
     HinderedRotor r;
     r.where = at(item);
     const YAML::Node* bond = find(e, "bond");
@@ -286,6 +286,16 @@ std::vector<HinderedRotor> SpeciesYamlValues::hindered_rotors(const YAML::Node& 
         error(*top, which + " 'top' must hold bond atom " + std::to_string(r.bond_atoms[0] + 1) +
                         " and not atom " + std::to_string(r.bond_atoms[1] + 1) +
                         ", expected the atoms on the side of the first bond atom");
+    }
+    if (const YAML::Node* moment = find(e, "moment")) {
+      const std::string m = text(*moment, which + " 'moment'");
+      if (m == "coupled")
+        r.moment = RotorMoment::coupled;
+      else if (m == "bond_axis")
+        r.moment = RotorMoment::bond_axis;
+      else
+        error(*moment, which + " 'moment' is " + quote(m) +
+                           ", expected coupled (to the overall rotation, the default) or bond_axis");
     }
     const YAML::Node* replaces = find(e, "replaces");
     if (!replaces)

@@ -1,6 +1,7 @@
 // Checked access to YAML values; see yaml_values.hpp.
 #include "yaml_values.hpp"
 
+#include <fmt/format.h>
 #include <yaml-cpp/eventhandler.h>
 
 #include <algorithm>
@@ -12,6 +13,7 @@
 #include <sstream>
 #include <string_view>
 
+#include "vibtherm/read_species.hpp"
 #include "vibtherm/species_builder.hpp"
 #include "vibtherm/spelling.hpp"
 #include "vibtherm/units.hpp"
@@ -56,11 +58,62 @@ bool may_hold_several_documents(const std::string& text) {
   return false;
 }
 
+// Counts the values (scalars, nulls, aliases, sequences, maps) of a YAML text through the
+// event parser, which keeps no tree, and fails at the first value past max_yaml_values.
+class ValueCounter : public YAML::EventHandler {
+ public:
+  explicit ValueCounter(const std::string& file_name) : file_(file_name) {}
+  void OnDocumentStart(const YAML::Mark&) override {}
+  void OnDocumentEnd() override {}
+  void OnNull(const YAML::Mark& mark, YAML::anchor_t) override { count(mark); }
+  void OnAlias(const YAML::Mark& mark, YAML::anchor_t) override { count(mark); }
+  void OnScalar(const YAML::Mark& mark, const std::string&, YAML::anchor_t, const std::string&) override {
+    count(mark);
+  }
+  void OnSequenceStart(const YAML::Mark& mark, const std::string&, YAML::anchor_t,
+                       YAML::EmitterStyle::value) override {
+    count(mark);
+  }
+  void OnSequenceEnd() override {}
+  void OnMapStart(const YAML::Mark& mark, const std::string&, YAML::anchor_t,
+                  YAML::EmitterStyle::value) override {
+    count(mark);
+  }
+  void OnMapEnd() override {}
+
+ private:
+  void count(const YAML::Mark& mark) {
+    if (++values_ > max_yaml_values)
+      fail({file_, mark.line + 1, mark.column + 1},
+           fmt::format("file holds more than {} YAML values (list entries, keys and scalars), expected fewer",
+                       max_yaml_values));
+  }
+  const std::string& file_;
+  std::size_t values_ = 0;
+};
+
+// yaml-cpp's node tree costs about 550 bytes per value: a 32 MiB file of short list entries
+// ("[1,1,1,...", 16 million values) would need about 9 GB before any check could count
+// them. A value ends at one of , [ { : - or a line end, and a flow-map key without a value
+// adds a null, so twice the count of those characters plus one bounds the values from
+// above; only a text whose bound passes the limit is counted exactly, by events.
+void check_yaml_value_count(const std::string& text, const std::string& file_name) {
+  std::size_t ends = 0;
+  for (const char c : text) ends += c == ',' || c == '[' || c == '{' || c == ':' || c == '-' || c == '\n';
+  if (2 * ends + 1 <= max_yaml_values) return;
+  std::istringstream stream(text);
+  YAML::Parser parser(stream);
+  ValueCounter counter(file_name);
+  while (parser.HandleNextDocument(counter)) {
+  }
+}
+
 }  // namespace
 
 YAML::Node load_single_yaml_document(const std::string& text, const std::string& file_name,
                                      const std::string& expected, const std::string& one_per_file) {
   try {
+    check_yaml_value_count(text, file_name);
     if (!may_hold_several_documents(text)) return YAML::Load(text);
     std::istringstream stream(text);
     YAML::Parser parser(stream);

@@ -98,6 +98,92 @@ TEST_CASE("reduced moment of two identical tops is half of one top's moment") {
         doctest::Approx(1.5 * test::mass_H1).epsilon(1e-12));
 }
 
+namespace {
+
+// A rotor with a cosine barrier about 0-based atoms `bond`.
+HinderedRotor cosine_rotor(std::array<int, 2> bond, int symmetry, double barrier_J_per_mol,
+                           double replaces_cm1) {
+  HinderedRotor r;
+  r.bond_atoms = bond;
+  r.symmetry = symmetry;
+  r.barrier_J_per_mol = barrier_J_per_mol;
+  r.replaces_cm1 = replaces_cm1;
+  return r;
+}
+
+// Methanol, staggered, as in examples/fuel-additive/methanol.yaml (structure approximately
+// r(CO) 1.427, r(OH) 0.956, r(CH) 1.094 Å, COH 108.5°; microwave structure, from memory).
+std::vector<Atom> methanol() {
+  using test::atom;
+  return {atom("C", test::mass_C12, 0, 0, 0),
+          atom("O", test::mass_O16, 1.427, 0, 0),
+          atom("H", test::mass_H1, 1.730343, 0.906597, 0),
+          atom("H", test::mass_H1, -0.365185, -1.031250, 0),
+          atom("H", test::mass_H1, -0.365185, 0.515625, -0.893089),
+          atom("H", test::mass_H1, -0.365185, 0.515625, 0.893089)};
+}
+
+// An independent route to the coupled moment: the top's turning as a mass-weighted 3N
+// displacement, its part orthogonal to the three translations and three rotations
+// (Gram–Schmidt by QR), squared (the kinetic energy with the external motions removed;
+// Wilson, Decius & Cross, Molecular Vibrations (1955), from memory).
+double projected_moment(const std::vector<Atom>& atoms, int a, int b, const std::vector<int>& top) {
+  const Eigen::Index n = static_cast<Eigen::Index>(3 * atoms.size());
+  Eigen::Vector3d centre = Eigen::Vector3d::Zero();
+  double M = 0.0;
+  for (const Atom& x : atoms) {
+    centre += x.mass_amu * x.position_angstrom;
+    M += x.mass_amu;
+  }
+  centre /= M;
+  Eigen::MatrixXd external(n, 6);
+  Eigen::VectorXd turn = Eigen::VectorXd::Zero(n);
+  const Eigen::Vector3d axis = (atoms[1].position_angstrom - atoms[0].position_angstrom).normalized();
+  CHECK(a == 0);
+  CHECK(b == 1);
+  for (std::size_t i = 0; i < atoms.size(); ++i) {
+    const double w = std::sqrt(atoms[i].mass_amu);
+    const Eigen::Vector3d r = atoms[i].position_angstrom - centre;
+    for (int k = 0; k < 3; ++k) {
+      const Eigen::Vector3d e = Eigen::Vector3d::Unit(k);
+      external.block<3, 1>(3 * static_cast<Eigen::Index>(i), k) = w * e;
+      external.block<3, 1>(3 * static_cast<Eigen::Index>(i), 3 + k) = w * e.cross(r);
+    }
+    if (std::find(top.begin(), top.end(), static_cast<int>(i)) != top.end())
+      turn.segment<3>(3 * static_cast<Eigen::Index>(i)) =
+          w * axis.cross(atoms[i].position_angstrom - atoms[0].position_angstrom);
+  }
+  const Eigen::MatrixXd Q =
+      Eigen::HouseholderQR<Eigen::MatrixXd>(external).householderQ() * Eigen::MatrixXd::Identity(n, 6);
+  return (turn - Q * (Q.transpose() * turn)).squaredNorm();
+}
+
+}  // namespace
+
+TEST_CASE("coupled reduced moment: equal to the bond-axis one for symmetric tops") {
+  const std::vector<Atom> atoms = ethane_like();
+  // Both tops symmetric about the axis, which is a principal axis: Σ m u = 0 and L = I_A e,
+  // so I_red = I_A − I_A²/(2 I_A) = I_A/2 (derived from the definition).
+  CHECK(coupled_reduced_moment_amu_A2(atoms, 0, 1, {0, 2, 4, 6}) ==
+        doctest::Approx(1.5 * test::mass_H1).epsilon(1e-12));
+  CHECK(projected_moment(atoms, 0, 1, {0, 2, 4, 6}) == doctest::Approx(1.5 * test::mass_H1).epsilon(1e-12));
+}
+
+TEST_CASE("coupled reduced moment of methanol's OH torsion") {
+  const std::vector<Atom> atoms = methanol();
+  const std::vector<int> oh = {1, 2}, ch3 = {0, 3, 4, 5};
+  const double simple = reduced_moment_amu_A2(atoms, 1, 0, oh);
+  const double coupled = coupled_reduced_moment_amu_A2(atoms, 1, 0, oh);
+  // 6.5 % below I_A I_B/(I_A + I_B) (figure in issue 7, from the I(2,3)-type definition of
+  // East & Radom 1997); here −6.52 %.
+  CHECK(coupled / simple - 1.0 == doctest::Approx(-0.0652).epsilon(2e-3));
+  // The same from the other side of the bond, and by the independent projection.
+  CHECK(coupled_reduced_moment_amu_A2(atoms, 0, 1, ch3) == doctest::Approx(coupled).epsilon(1e-12));
+  CHECK(projected_moment(atoms, 0, 1, ch3) == doctest::Approx(coupled).epsilon(1e-12));
+  // A top off the axis turns less freely: the coupled moment never exceeds the uncoupled one.
+  CHECK(coupled < simple);
+}
+
 TEST_CASE("a ring bond cannot be split into two tops") {
   using test::atom;
   // Test geometry: a triangle of carbons 1.5 Å apart.
@@ -175,7 +261,7 @@ TEST_CASE("a cosine potential given as a scan gives the barrier's levels") {
   for (int deg = 0; deg < 120; deg += 10)
     scan.push_back({deg + 0.0, 0.5 * V * (1.0 - std::cos(3.0 * deg * c::pi / 180.0))});
   const TorsionLevels a = torsion_levels(1.5, cosine_barrier(V, 3), 6000.0);
-  const TorsionLevels b = torsion_levels(1.5, fit_scan(scan, 3, {}), 6000.0);
+  const TorsionLevels b = torsion_levels(1.5, fit_scan(scan, 3, {}).potential, 6000.0);
   REQUIRE(a.energies_J_per_mol.size() == b.energies_J_per_mol.size());
   for (std::size_t i = 1; i < 40; ++i)
     CHECK(b.energies_J_per_mol[i] == doctest::Approx(a.energies_J_per_mol[i]).epsilon(1e-6));
@@ -184,9 +270,48 @@ TEST_CASE("a cosine potential given as a scan gives the barrier's levels") {
   std::vector<ScanPoint> full;
   for (int deg = 0; deg < 360; deg += 15)
     full.push_back({deg + 0.0, 0.5 * V * (1.0 - std::cos(3.0 * (deg + 60.0) * c::pi / 180.0))});
-  const TorsionLevels d = torsion_levels(1.5, fit_scan(full, 3, {}), 6000.0);
+  const TorsionLevels d = torsion_levels(1.5, fit_scan(full, 3, {}).potential, 6000.0);
   for (std::size_t i = 1; i < 40; ++i)
     CHECK(d.energies_J_per_mol[i] == doctest::Approx(a.energies_J_per_mol[i]).epsilon(1e-6));
+}
+
+TEST_CASE("scan fit residuals and period check") {
+  const double V = 12e3;  // J/mol, test parameter
+  std::vector<ScanPoint> scan;
+  for (int deg = 0; deg <= 360; deg += 10)
+    scan.push_back({deg + 0.0, 0.5 * V * (1.0 - std::cos(3.0 * deg * c::pi / 180.0))});
+  // A pure cosine is fitted exactly (least squares on an exact series, definition).
+  const ScanFit exact = fit_scan(scan, 3, {});
+  CHECK(exact.rms_residual_J_per_mol < 1e-8);
+  CHECK(exact.period_checked);
+  CHECK(exact.period_mismatch_J_per_mol < 1e-8);
+  CHECK(scan_fit_warnings(exact, 3, "rotor").empty());
+  // One point 0.5 kJ/mol off: the period check sees it against its images 120° away, and the
+  // series (which cannot follow one point) leaves a residual.
+  std::vector<ScanPoint> bumped = scan;
+  bumped[4].energy_J_per_mol += 500.0;  // 40°
+  const ScanFit bump = fit_scan(bumped, 3, {});
+  CHECK(bump.period_mismatch_J_per_mol == doctest::Approx(500.0).epsilon(1e-9));
+  CHECK(bump.largest_residual_angle_deg == doctest::Approx(40.0));
+  CHECK(bump.largest_residual_J_per_mol > 200.0);
+  CHECK(bump.largest_residual_J_per_mol < 500.0);
+  CHECK(scan_fit_warnings(bump, 3, "rotor").size() == 2);
+  // A two-fold potential declared three-fold: the period check names the mismatch.
+  std::vector<ScanPoint> twofold;
+  for (int deg = 0; deg < 360; deg += 10)
+    twofold.push_back({deg + 0.0, 0.5 * V * (1.0 - std::cos(2.0 * deg * c::pi / 180.0))});
+  const ScanFit wrong = fit_scan(twofold, 3, {});
+  CHECK(wrong.period_mismatch_J_per_mol > 0.5 * V);
+  const std::vector<std::string> w = scan_fit_warnings(wrong, 3, "rotor");
+  REQUIRE(!w.empty());
+  CHECK(w.front().find("does not repeat every 120 deg") != std::string::npos);
+  // A scan over one period cannot check the period, and says so.
+  std::vector<ScanPoint> one;
+  for (int deg = 0; deg < 120; deg += 10)
+    one.push_back({deg + 0.0, 0.5 * V * (1.0 - std::cos(3.0 * deg * c::pi / 180.0))});
+  const ScanFit single = fit_scan(one, 3, {});
+  CHECK_FALSE(single.period_checked);
+  CHECK(scan_fit_note(single, one.size(), "rotor").find("period not checked") != std::string::npos);
 }
 
 TEST_CASE("a scan must cover a whole period") {
@@ -218,12 +343,7 @@ TEST_CASE("engine: the rotor replaces its torsion") {
   // Test wavenumbers (not measured): 18 modes, the torsion at 300.
   s.frequencies_cm1 = {300,  800,  800,  1000, 1200, 1200, 1400, 1400, 1400,
                        1450, 1450, 1450, 1450, 2900, 2950, 2950, 3000, 3000};
-  HinderedRotor r;
-  r.bond_atoms = {0, 1};
-  r.symmetry = 3;
-  r.barrier_J_per_mol = 12e3;
-  r.replaces_cm1 = 300.4;
-  s.hindered_rotors = {r};
+  s.hindered_rotors = {cosine_rotor({0, 1}, 3, 12e3, 300.4)};
   const PreparedSpecies harmonic = prepare_species([&] {
     Species h = s;
     h.hindered_rotors.clear();
@@ -257,6 +377,37 @@ TEST_CASE("engine: the rotor replaces its torsion") {
     big.hindered_rotors[0].symmetry = sigma;
     CHECK_THROWS_WITH_AS(prepare_species(big), doctest::Contains("symmetry is"), InputError);
   }
+}
+
+TEST_CASE("engine: methanol's OH rotor with the coupled and the bond-axis moment") {
+  Species s;
+  s.name = "CH3OH";
+  s.atoms = methanol();
+  s.formula = {{"C", 1}, {"H", 4}, {"O", 1}};
+  s.symmetry_number = 1;
+  // Fundamentals of examples/fuel-additive/methanol.yaml (Shimanouchi, NSRDS-NBS 39, 1972;
+  // from memory, rounded); the 295 cm^-1 torsion becomes the rotor. A low test barrier
+  // (0.5 kJ/mol) keeps the rotor near its free limit.
+  s.frequencies_cm1 = {3681, 3000, 2844, 1477, 1455, 1345, 1060, 1033, 2960, 1477, 1165, 295};
+  s.hindered_rotors = {cosine_rotor({1, 0}, 3, 500.0, 295.0)};
+  const PreparedSpecies coupled = prepare_species(s);
+  s.hindered_rotors[0].moment = RotorMoment::bond_axis;
+  const PreparedSpecies bond_axis = prepare_species(s);
+  const double ratio =
+      coupled.hindered_rotors[0].reduced_moment_amu_A2 / bond_axis.hindered_rotors[0].reduced_moment_amu_A2;
+  CHECK(ratio == doctest::Approx(1.0 - 0.0652).epsilon(2e-3));
+  CHECK(coupled.hindered_rotors[0].bond_axis_moment_amu_A2 ==
+        doctest::Approx(bond_axis.hindered_rotors[0].reduced_moment_amu_A2).epsilon(1e-14));
+  // A free rotor's S holds ½ R ln I (q ∝ √I, textbook): the 6.5 % lower moment moves S° by
+  // ½ R ln 0.935 = −0.28 J/(mol K) (the figure in issue 7); the barrier changes this a little.
+  const double dS = evaluate(coupled, 298.15).S_J_per_mol_K - evaluate(bond_axis, 298.15).S_J_per_mol_K;
+  CHECK(dS == doctest::Approx(0.5 * c::gas_constant_J_per_mol_K * std::log(ratio)).epsilon(0.05));
+  CHECK(dS == doctest::Approx(-0.28).epsilon(0.05));
+  // The note names the definition and gives the other value.
+  bool noted = false;
+  for (const std::string& n : coupled.notes)
+    noted = noted || n.find("coupled to the overall rotation") != std::string::npos;
+  CHECK(noted);
 }
 
 TEST_CASE("basis sized from the highest temperature: converged at 3000 K up to 5000 amu A^2") {

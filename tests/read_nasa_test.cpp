@@ -102,9 +102,9 @@ TEST_CASE("malformed blocks name their line") {
   CHECK(error_of(bad_t) == "no error");
   std::string zero_t = o2_fixed;
   zero_t.replace(45, 10, "     0.000");
-  CHECK(
-      error_of(zero_t) ==
-      "bad.dat:1:46: error: species 'O2': temperatures T_low 0, T_mid 1000, T_high 3500 K must be positive");
+  CHECK(error_of(zero_t) ==
+        "bad.dat:1:46: error: species 'O2': temperatures T_low 0, T_mid 1000, T_high 3500 K, expected 1 to "
+        "100000 K");
   CHECK(error_of("O2 something without a phase\n 1.0E+00 2.0E+00\n") ==
         "bad.dat:1:45: error: species 'O2': expected the phase (G, L or S) in column 45 followed by T_low, "
         "T_high and "

@@ -3,6 +3,7 @@
 #include <doctest/doctest.h>
 
 #include <fstream>
+#include <limits>
 #include <sstream>
 
 #include "test_nasa.hpp"
@@ -103,4 +104,18 @@ TEST_CASE("what does not fit is an error, not a truncation") {
   n = o2_record();
   n.name = "two words";
   CHECK_THROWS_AS(write_nasa7_record(n), InputError);
+}
+
+// Issue 8: a non-finite coefficient once reached the writer and came back as "coefficient
+// -nan cannot be written" with neither species nor file; now the message names the species
+// and the quantity, and the command line adds the species file (cli/common.cpp run_species).
+TEST_CASE("a coefficient that is not finite is an error, never nan or inf in the file") {
+  Nasa7 n = o2_record();
+  n.low[2] = std::numeric_limits<double>::quiet_NaN();
+  CHECK_THROWS_WITH_AS(write_nasa7_record(n), "error: species 'O2': coefficient nan cannot be written",
+                       InputError);
+  n = o2_record();
+  n.high[6] = -std::numeric_limits<double>::infinity();
+  CHECK_THROWS_WITH_AS(write_nasa7({n}), "error: species 'O2': coefficient -inf cannot be written",
+                       InputError);
 }

@@ -2,6 +2,7 @@
 
 #include <doctest/doctest.h>
 
+#include <limits>
 #include <sstream>
 
 #include "test_text.hpp"
@@ -105,4 +106,16 @@ TEST_CASE("NASA-9 overflows are errors") {
   n = sample();
   n.name = std::string(19, 'N');
   CHECK_THROWS_AS(write_nasa9_record(n), InputError);
+}
+
+// Issue 8: a non-finite coefficient is an error naming the species, never nan in the file.
+TEST_CASE("NASA-9: a coefficient that is not finite is an error") {
+  Nasa9 n = sample();
+  n.ranges[0].a[3] = std::numeric_limits<double>::quiet_NaN();
+  CHECK_THROWS_WITH_AS(write_nasa9_record(n), "error: species 'CH4': coefficient nan cannot be written",
+                       InputError);
+  n = sample();
+  n.ranges[0].b2 = std::numeric_limits<double>::infinity();
+  CHECK_THROWS_WITH_AS(write_nasa9_record(n), "error: species 'CH4': coefficient inf cannot be written",
+                       InputError);
 }

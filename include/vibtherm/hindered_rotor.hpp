@@ -3,11 +3,13 @@
 #pragma once
 
 #include <limits>
+#include <optional>
 #include <string_view>
 #include <vector>
 
 #include "vibtherm/partition.hpp"
 #include "vibtherm/species.hpp"
+#include "vibtherm/torsion_potential.hpp"
 
 namespace vibtherm {
 
@@ -15,35 +17,28 @@ namespace vibtherm {
 // both are normally copied from one frequency job, so only print rounding separates them.
 inline constexpr double replaces_tolerance_cm1 = 1.0;
 
-// V(φ) = c0 + Σ_k [cos_k cos(kφ) + sin_k sin(kφ)], k = 1..K, in J/mol; index 0 of
-// `sin_J_per_mol` is unused (kept 0) so both vectors are indexed by k.
-struct TorsionPotential {
-  std::vector<double> cos_J_per_mol{0.0};
-  std::vector<double> sin_J_per_mol{0.0};
-  double value_J_per_mol(double phi_rad) const;
-  double minimum_J_per_mol() const;  // on a 1/20 degree grid
-};
-
-// V(φ) = V/2 (1 − cos(σφ)) (design.md section 4).
-TorsionPotential cosine_barrier(double barrier_J_per_mol, int symmetry);
-
-// Least-squares fit of a scan (degrees, J/mol) to the series in cos/sin(kσφ), k = 1..K,
-// K = min(6, (distinct angles modulo 360/σ − 1) / 2). Throws InputError (at `where`)
-// unless the angles cover a whole period 360/σ with no gap wider than a quarter of it.
-TorsionPotential fit_scan(const std::vector<ScanPoint>& scan, int symmetry, const SourceLocation& where);
-
 // The atoms (0-based) on the side of `atom_a` when the bond a–b is cut; bonded means
 // closer than 1.25 × the sum of covalent radii. Throws InputError when a and b stay
 // connected (a ring) or an element has no tabulated radius.
 std::vector<int> top_by_connectivity(const std::vector<Atom>& atoms, int atom_a, int atom_b,
                                      const SourceLocation& where);
 
-// Reduced moment of the internal rotation about the a–b axis, the I(2,1) approximation
-// (East & Radom, J. Chem. Phys. 106, 6655 (1997), from memory): each top's moment about
-// the bond axis, I_red = I_A I_B / (I_A + I_B). `top_a` lists the atoms (0-based) of the
-// side of atom a; the other atoms form the second top.
+// Reduced moment of the internal rotation about the a–b axis, the two tops' moments about
+// the bond axis combined as I_A I_B / (I_A + I_B) (East & Radom, J. Chem. Phys. 106, 6655
+// (1997), their uncoupled type; from memory). `top_a` lists the atoms (0-based) of the side
+// of atom a; the other atoms form the second top.
 double reduced_moment_amu_A2(const std::vector<Atom>& atoms, int atom_a, int atom_b,
                              const std::vector<int>& top_a);
+
+// The reduced moment coupled to the overall motion (Pitzer, J. Chem. Phys. 14, 239 (1946);
+// East & Radom's coupled type; both from memory): the top turns about the bond axis while
+// the molecule's total linear and angular momenta stay zero, I_red = A − |Σ m u|²/M −
+// Lᵀ I⁻¹ L with u = e × (r − r_a) over the top's atoms, A = Σ m |u|², L = Σ m r × u (r from
+// the centre of mass), I the molecule's inertia tensor. Symmetric in the two tops; equal to
+// I_A I_B/(I_A + I_B) when both tops are symmetric about the axis and the axis is a
+// principal one (ethane), below it for an off-axis top (methanol's OH: 6.5 %).
+double coupled_reduced_moment_amu_A2(const std::vector<Atom>& atoms, int atom_a, int atom_b,
+                                     const std::vector<int>& top_a);
 
 // Eigenvalues of H = −B d²/dφ² + V(φ), B = ħ²/(2 I_red), in the free-rotor basis e^{imφ},
 // |m| ≤ M, sorted, in J/mol (absolute, on the scale of V).
@@ -89,9 +84,11 @@ MotionTerms hindered_rotor_terms(const TorsionLevels& levels, int symmetry, doub
 // A rotor of a species, ready for the engine.
 struct HinderedRotorModel {
   HinderedRotor input;
-  std::vector<int> top_atoms;  // 0-based, the side of bond atom 1
-  double reduced_moment_amu_A2 = 0.0;
+  std::vector<int> top_atoms;            // 0-based, the side of bond atom 1
+  double reduced_moment_amu_A2 = 0.0;    // of the definition `input.moment` names
+  double bond_axis_moment_amu_A2 = 0.0;  // I_A I_B / (I_A + I_B), shown beside a coupled one
   TorsionPotential potential;
+  std::optional<ScanFit> scan_fit;  // a rotor given by a scan
   TorsionLevels levels;
 };
 

@@ -3,6 +3,7 @@
 // are still read. Record parsing lives in src/nasa7_record.cpp and src/nasa9_record.cpp.
 #pragma once
 
+#include <cstddef>
 #include <string>
 #include <vector>
 
@@ -46,7 +47,10 @@ struct NasaFile {
 // text with neither a THERMO keyword nor any number with an exponent, of which nothing
 // could be read.
 NasaFile read_nasa_records(const std::string& text, const std::string& file_name);
+// A regular file (not /dev/zero or a FIFO) of at most max_nasa_file_bytes, else InputError.
 NasaFile read_nasa_records_file(const std::string& path);
+// 64 MiB: about 200,000 NASA-7 records (a 10,000-species thermo file has about 3 MB).
+inline constexpr std::size_t max_nasa_file_bytes = 64u << 20;
 
 // Strict forms: the species of a file that has no bad record; else its first error.
 std::vector<NasaPolynomial> read_nasa(const std::string& text, const std::string& file_name);

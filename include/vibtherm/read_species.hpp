@@ -19,6 +19,10 @@ namespace vibtherm {
 inline constexpr std::size_t max_species_file_bytes = 32u << 20;  // 32 MiB
 inline constexpr std::size_t max_species_atoms = 2000;
 inline constexpr std::size_t max_species_frequencies = 6000;
+// Values (list entries, keys, scalars) in one YAML file, counted before the document is
+// built: yaml-cpp's tree costs about 550 bytes per value, so this bounds it near 550 MB.
+// A full Hessian for up to 333 atoms (its lower triangle for up to 471) fits.
+inline constexpr std::size_t max_yaml_values = 1000000;
 
 // Reads a file, choosing the reader by content and extension (species_format.hpp). Only
 // regular files are read (not /dev/zero, a FIFO or a directory). When `bytes` is given it

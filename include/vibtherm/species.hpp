@@ -48,14 +48,18 @@ struct ScanPoint {
 };
 
 // A hindered internal rotor as given (design.md section 4); hindered_rotor.hpp builds it.
+// How a rotor's reduced moment is defined (hindered_rotor.hpp).
+enum class RotorMoment { coupled, bond_axis };
+
 struct HinderedRotor {
-  SourceLocation where;                     // the rotor's entry in the species file
-  std::array<int, 2> bond_atoms{0, 1};      // 0-based atoms of the rotation axis
-  int symmetry = 1;                         // internal symmetry number, period of V
-  std::optional<double> barrier_J_per_mol;  // V(φ) = V/2 (1 − cos(symmetry·φ)), or
-  std::vector<ScanPoint> scan;              // a scan instead
-  std::vector<int> top_atoms;               // 0-based side of bond atom 1; empty = by connectivity
-  double replaces_cm1 = 0.0;                // wavenumber of the torsional mode replaced
+  SourceLocation where;                       // the rotor's entry in the species file
+  std::array<int, 2> bond_atoms{0, 1};        // 0-based atoms of the rotation axis
+  int symmetry = 1;                           // internal symmetry number, period of V
+  std::optional<double> barrier_J_per_mol;    // V(φ) = V/2 (1 − cos(symmetry·φ)), or
+  std::vector<ScanPoint> scan;                // a scan instead
+  std::vector<int> top_atoms;                 // 0-based side of bond atom 1; empty = by connectivity
+  RotorMoment moment = RotorMoment::coupled;  // input key `moment`
+  double replaces_cm1 = 0.0;                  // wavenumber of the torsional mode replaced
 };
 
 // Barrier heights of a transition state for the Eckart tunnelling correction (tunnelling.hpp).

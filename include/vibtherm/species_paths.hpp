@@ -41,6 +41,10 @@ struct SpeciesSource {
 // they list.
 std::vector<SpeciesSource> expand_species_paths(const std::vector<std::string>& args);
 
+// The manifests the expansion of `args` reads, each once, in the order first read: inputs
+// too, which an output must not replace.
+std::vector<std::string> manifest_paths(const std::vector<std::string>& args);
+
 // The file paths of sources (an inline species gives its manifest).
 std::vector<std::string> source_paths(const std::vector<SpeciesSource>& sources);
 

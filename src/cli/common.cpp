@@ -353,9 +353,15 @@ void check_output_is_not_input(const std::string& output, const std::vector<std:
   }
 }
 
-void check_output_is_not_input(const std::string& output, const std::vector<SpeciesSource>& inputs,
-                               const std::string& what) {
-  check_output_is_not_input(output, source_paths(inputs), what);
+void check_output_is_not_input(const std::string& output, const CommonOptions& options,
+                               const std::vector<SpeciesSource>& inputs, const std::string& what) {
+  std::error_code ec;
+  if (output.empty() || output == "-" || !fs::exists(output, ec)) return;
+  std::vector<std::string> files = source_paths(inputs);
+  for (std::string& manifest : manifest_paths(options.inputs)) files.push_back(std::move(manifest));
+  if (!options.method_file.empty()) files.push_back(options.method_file);
+  files.insert(files.end(), options.formation_reactions.begin(), options.formation_reactions.end());
+  check_output_is_not_input(output, files, what);
 }
 
 void write_output(const std::string& path, const std::string& content) {

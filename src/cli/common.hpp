@@ -109,8 +109,10 @@ class OutputSet {
 // path): `what` is the option, e.g. "-o".
 void check_output_is_not_input(const std::string& output, const std::vector<std::string>& inputs,
                                const std::string& what);
-void check_output_is_not_input(const std::string& output, const std::vector<SpeciesSource>& inputs,
-                               const std::string& what);
+// For a batch: the sources' files, the manifests that listed them (nested ones too), the
+// --method file and the --formation-reactions files.
+void check_output_is_not_input(const std::string& output, const CommonOptions& options,
+                               const std::vector<SpeciesSource>& inputs, const std::string& what);
 
 // Writes `content` to `path` ("-" = stdout) through a temporary file renamed into place.
 void write_output(const std::string& path, const std::string& content);

@@ -98,7 +98,7 @@ void setup_eval(CLI::App& sub) {
                "tabulate the good records of a file with bad ones (each bad record is reported), exit 1");
   add_jobs_option(sub, o->jobs);
   sub.callback([o] {
-    check_output_is_not_input(o->output, {o->file}, "-o");
+    check_output_is_not_input(o->output, eval_inputs(*o), "-o");
     OutputSet outputs;
     const std::size_t out = outputs.add(o->output);
     const NasaFile file = read_for_eval(o->file, o->keep_going);

@@ -25,6 +25,20 @@ bool is_species_source(const std::string& path) {
 
 }  // namespace
 
+std::vector<std::string> eval_inputs(const EvalOptions& o) {
+  std::vector<std::string> files{o.file};
+  if (o.against.empty()) return files;
+  files.push_back(o.against);
+  std::error_code ec;
+  if (!o.output.empty() && o.output != "-" && std::filesystem::exists(o.output, ec) &&
+      is_species_source(o.against)) {
+    for (std::string& path : source_paths(expand_species_paths({o.against})))
+      files.push_back(std::move(path));
+    for (std::string& path : manifest_paths({o.against})) files.push_back(std::move(path));
+  }
+  return files;
+}
+
 std::string compare_output(const EvalOptions& o, const std::vector<const NasaPolynomial*>& chosen,
                            const std::vector<double>& asked) {
   std::vector<CurveComparison> rows;

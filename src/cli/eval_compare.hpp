@@ -26,6 +26,10 @@ struct EvalOptions {
 // with it each is printed, and Exit(1) when no species could be read.
 NasaFile read_for_eval(const std::string& path, bool keep_going);
 
+// The files eval reads: FILE, and with --against the other NASA file or the species files
+// (and manifests) it names. An output must not replace any of them.
+std::vector<std::string> eval_inputs(const EvalOptions& options);
+
 // The output of `eval FILE --against OTHER`: the chosen species of FILE compared with the
 // species of the same name in OTHER, at `asked` (empty: every 10 K over the common range).
 std::string compare_output(const EvalOptions& options, const std::vector<const NasaPolynomial*>& chosen,

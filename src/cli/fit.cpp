@@ -89,7 +89,7 @@ void setup_fit(CLI::App& sub) {
     fit.grid_step_K = o->grid_step_K;
 
     const auto paths = batch_paths(o->common);
-    check_output_is_not_input(o->common.output, paths, "-o");
+    check_output_is_not_input(o->common.output, o->common, paths, "-o");
     OutputSet outputs;
     const std::size_t out = outputs.add(o->common.output);
     const FitPlan plan(fit);  // grid, basis and constraint factorisation shared by every species

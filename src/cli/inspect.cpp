@@ -14,7 +14,7 @@ void setup_inspect(CLI::App& sub) {
     // inspect evaluates at 298.15 K and gives conformer populations up to 1000 K.
     options->max_temperature_K = 1000.0;
     const auto paths = batch_paths(*options);
-    check_output_is_not_input(options->output, paths, "-o");
+    check_output_is_not_input(options->output, *options, paths, "-o");
     OutputSet outputs;
     const std::size_t out = outputs.add(options->output);
     std::vector<SpeciesFacts> facts;

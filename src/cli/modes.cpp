@@ -38,8 +38,8 @@ void setup_modes(CLI::App& sub) {
     validate(*thresholds);
     const auto temps = temperatures_or(*options, default_modes_temperatures());
     const auto paths = batch_paths(*options);
-    check_output_is_not_input(options->output, paths, "-o");
-    check_output_is_not_input(*svg_path, paths, "--svg");
+    check_output_is_not_input(options->output, *options, paths, "-o");
+    check_output_is_not_input(*svg_path, *options, paths, "--svg");
     if (!svg_path->empty() && *svg_path == options->output)
       fail({}, "-o and --svg name the same file, expected two different outputs");
     // Both outputs are opened first and moved into place together at the end.

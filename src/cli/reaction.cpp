@@ -41,7 +41,15 @@ void setup_reaction(CLI::App& sub) {
     o->common.max_temperature_K = *std::max_element(temps.begin(), temps.end());
     const CommonOptions& c = o->common;
     const ModelOptions model = model_options(c);
-    check_output_is_not_input(c.output, c.inputs, "-o");
+    if (std::error_code ec; c.output != "-" && std::filesystem::exists(c.output, ec)) {
+      // The reaction files, the species files they name, --method and --formation-reactions.
+      std::vector<std::string> inputs = c.inputs;
+      for (const std::string& path : c.inputs)
+        for (const ReactionFileTerm& term : read_reaction_file(path).terms) inputs.push_back(term.path);
+      if (!c.method_file.empty()) inputs.push_back(c.method_file);
+      inputs.insert(inputs.end(), c.formation_reactions.begin(), c.formation_reactions.end());
+      check_output_is_not_input(c.output, inputs, "-o");
+    }
     const ReactionFormations formations = formations_from_reactions(c, model);
     ReactionReport report;
     report.standard_state = standard_state_text(model);

@@ -64,7 +64,7 @@ void setup_report(CLI::App& sub) {
         std::max(svg_temperature_span_K(wanted).second, *std::max_element(wanted.begin(), wanted.end()));
 
     const auto paths = batch_paths(o->common);
-    check_output_is_not_input(o->common.output, paths, "-o");
+    check_output_is_not_input(o->common.output, o->common, paths, "-o");
     OutputSet outputs;
     const std::size_t out = outputs.add(o->common.output);
     std::vector<ReportSpecies> species;

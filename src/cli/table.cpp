@@ -53,7 +53,7 @@ void setup_table(CLI::App& sub) {
     const auto temps = temperatures_or(*options, default_table_temperatures());
     options->max_temperature_K = *std::max_element(temps.begin(), temps.end());
     const auto paths = batch_paths(*options);
-    check_output_is_not_input(options->output, paths, "-o");
+    check_output_is_not_input(options->output, *options, paths, "-o");
     const std::string& f = options->format;
     const TableFormat format = f == "json"  ? TableFormat::json
                                : f == "csv" ? TableFormat::csv

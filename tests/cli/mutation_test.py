@@ -1,10 +1,14 @@
 #!/usr/bin/env python3
 """Feeds seeded mutations of the valid inputs in tests/data through the executable and
 checks the promise of design.md section 7 on each: the run ends with exit 0, 1 or 2 and
-never by a signal or a hang; on 2 it printed exactly one error line naming the file and
-wrote nothing; on 0 every number in the output is finite (no nan or inf).
+never by a signal or a hang; on 2 it printed exactly one located error line (FILE, or
+FILE:LINE:COL, then ": error: ", at most 1,000 characters) besides any warnings, and wrote
+nothing; on 0 every number in the output, and in any warning on stderr, is finite (no nan
+or inf). Runs are not quiet (-q), so the warnings are checked too.
 
-Species files (.yaml, .xyz, QCSchema .json, Molden .molden) go through `table`, NASA files (.dat) through `eval`. The
+Species files (.yaml, .xyz, QCSchema .json, Molden .molden) go through `table`, and every
+fourth through `fit --allow-missing-hf` (read, prepare, tabulate, fit, write NASA-7), NASA
+files (.dat) through `eval`. The
 mutations are byte- and line-level edits (a number replaced by an extreme or non-finite
 value, lines deleted, duplicated or swapped, bytes flipped, YAML syntax inserted, the file
 cut short), one to three per input, from a fixed seed so a failure can be replayed.
@@ -29,6 +33,10 @@ EXTREMES = ["nan", "inf", "-inf", "1e308", "-1e308", "1e-320", "0", "-0", "1e30"
 TOKENS = [":", "[", "]", "{", "}", "- ", "&a ", "*a", "!!binary ", "\t", "\x00", "#", ",", "'", '"', "\n", "  ",
           "{value: 1, unit: eV}", "1e308", "nan", "-", "END", "THERMO", "&"]
 NUMBER = re.compile(rb"-?\d+(\.\d*)?([eEdD][-+]?\d+)?")
+# A located error line: the file it is about (the mutant, or a file it names: a conformer,
+# `from:` or method file), its line and column where the reader knows them, then the error.
+LOCATED = re.compile(r"^[^\s:][^:]*(:\d+:\d+|:\d+)?: error: \S")
+NON_FINITE = re.compile(r"(?<![a-z])(nan|inf)(?![a-z])")
 
 
 def mutate(text, rng):
@@ -72,8 +80,9 @@ ENV["UBSAN_OPTIONS"] = ":".join(filter(None, [ENV.get("UBSAN_OPTIONS", ""), f"ex
 
 def run_one(job):
     path, subcommand, out = job
+    extra = ["--allow-missing-hf"] if subcommand == "fit" else []
     try:
-        r = subprocess.run([exe, subcommand, os.path.basename(path), "-o", out, "-q"], cwd=os.path.dirname(path),
+        r = subprocess.run([exe, subcommand, os.path.basename(path), *extra, "-o", out], cwd=os.path.dirname(path),
                            capture_output=True, timeout=60, env=ENV)
     except subprocess.TimeoutExpired:
         return f"{path}: no end within 60 s"
@@ -86,16 +95,19 @@ def run_one(job):
     if r.returncode not in (0, 1, 2):
         return f"{path}: exit status {r.returncode}: {stderr[-300:]}"
     if r.returncode == 2:
-        if len(lines) != 1 or "error:" not in lines[0]:
-            return f"{path}: exit 2 with stderr {lines[:3]!r}, expected one error line"
+        errors = [line for line in lines if not line.startswith(("vibtherm: warning: ", "vibtherm: info: "))]
+        if len(errors) != 1 or not LOCATED.match(errors[0]) or len(errors[0]) > 1000:
+            return f"{path}: exit 2 with stderr {errors[:3]!r}, expected one located error line"
         if os.path.exists(out):
             return f"{path}: exit 2 but {out} was written"
     if r.returncode == 0:
         if not os.path.exists(out):
             return f"{path}: exit 0 without an output file"
         body = open(out, "rb").read().decode("utf-8", "replace").lower()
-        if re.search(r"(?<![a-z])(nan|inf)(?![a-z])", body):
+        if NON_FINITE.search(body):
             return f"{path}: exit 0 with a non-finite number in the output"
+        if NON_FINITE.search(stderr.lower()):
+            return f"{path}: exit 0 with a non-finite number on stderr: {stderr[-300:]}"
     return None
 
 
@@ -114,7 +126,8 @@ with tempfile.TemporaryDirectory() as tmp:
         path = os.path.join(work, f"mutant-{k:04d}-{stem}{ext}")
         with open(path, "wb") as f:
             f.write(mutate(text, rng))
-        jobs.append((path, "eval" if ext == ".dat" else "table", os.path.join(tmp, f"out-{k:04d}.txt")))
+        subcommand = "eval" if ext == ".dat" else "fit" if (k // len(seeds)) % 4 == 3 else "table"
+        jobs.append((path, subcommand, os.path.join(tmp, f"out-{k:04d}.txt")))
     with concurrent.futures.ThreadPoolExecutor(max_workers=os.cpu_count() or 2) as pool:
         results = list(pool.map(run_one, jobs))
     for (path, _, out), problem in zip(jobs, results):

@@ -28,8 +28,22 @@ ARGUMENT_CASES = [
      "error: temperature list '0.001': 0.001 K is outside 1 to 100000 K"),
     (["../data/water.yaml", "--temps", "1e300"],
      "error: temperature list '1e300': 1e+300 K is outside 1 to 100000 K"),
+    (["../data/water.yaml", "--temps", "1e-320"],
+     "error: temperature list '1e-320': 9.99989e-321 K is outside 1 to 100000 K"),
     (["../data/water.yaml", "--scale", "1e-320"], "error: frequency scale factor is 9.99989e-321, expected 0.1 to 10"),
     (["../data/water.yaml", "--pressure", "1e-30Pa"], "error: pressure is 1e-30, expected 1e-06 to 1e+09 Pa"),
+    # Per-quantity scale factors and low-frequency wavenumbers are bounded too (1e308 gave an
+    # infinite ZPE, 1e-320 a NaN Cp).
+    (["../data/water.yaml", "--scale-zpe", "1e308"],
+     "../data/water.yaml: error: frequency scale factor for the zero-point energy is 1e+308, expected 0.1 to 10"),
+    (["../data/water.yaml", "--scale-entropy", "1e-320"],
+     "../data/water.yaml: error: frequency scale factor for the entropy is 9.99989e-321, expected 0.1 to 10"),
+    (["../data/water.yaml", "--low-freq", "qrrho", "--qrrho-omega0", "1e308"],
+     "error: the qRRHO reference wavenumber (--qrrho-omega0) is 1e+308, expected 0.01 to 100000 cm^-1"),
+    (["../data/water.yaml", "--low-freq", "floor", "--low-freq-floor", "1e-320"],
+     "error: the wavenumber floor (--low-freq-floor) is 9.99989e-321, expected 0.01 to 100000 cm^-1"),
+    (["../data/water.yaml", "--soft-mode-warning", "1e308"],
+     "error: the soft-mode warning threshold (--soft-mode-warning) is 1e+308, expected 0 to 100000 cm^-1"),
     (["/dev/zero"], "/dev/zero: error: is not a regular file (a device, FIFO or socket), expected a species file"),
     (["does-not-exist.yaml"],
      "does-not-exist.yaml: error: cannot read file (missing or not readable), expected a species file"),
@@ -42,6 +56,13 @@ FIT_ARGUMENT_CASES = [
      "error: --range '200:1000:1e300': breakpoint 3 is 1e+300, expected 1 to 100000 K"),
     (["../data/water.yaml", "--range", "200:auto:1e8"],
      "error: --range '200:auto:1e8': breakpoint 3 is 1e+08, expected 1 to 100000 K"),
+]
+
+# eval of a non-regular file once read /dev/zero until memory ran out.
+EVAL_ARGUMENT_CASES = [
+    (["/dev/zero"], "/dev/zero: error: is not a regular file (a device, FIFO or socket), expected a NASA polynomial file"),
+    (["../data/o2_gri30_from_memory.dat", "--against", "/dev/zero"],
+     "/dev/zero: error: is not a regular file (a device, FIFO or socket), expected a NASA polynomial file"),
 ]
 
 
@@ -91,7 +112,9 @@ def main():
         run_case(exe, bad_dir, args, expected, " ".join(args), failures)
     for args, expected in FIT_ARGUMENT_CASES:
         run_case(exe, bad_dir, args, expected, "fit " + " ".join(args), failures, "fit")
-    total = len(inputs) + len(ARGUMENT_CASES) + len(FIT_ARGUMENT_CASES)
+    for args, expected in EVAL_ARGUMENT_CASES:
+        run_case(exe, bad_dir, args, expected, "eval " + " ".join(args), failures, "eval")
+    total = len(inputs) + len(ARGUMENT_CASES) + len(FIT_ARGUMENT_CASES) + len(EVAL_ARGUMENT_CASES)
     for f in failures:
         print("FAIL", f)
     print(f"{total - len(failures)} of {total} bad-input cases behave as expected")

@@ -4,6 +4,7 @@
 Usage: run_cli_checks.py VIBTHERM_EXE PROJECT_ROOT
 """
 import json
+import math
 import os
 import subprocess
 import sys
@@ -153,6 +154,50 @@ with tempfile.TemporaryDirectory() as tmp:
     hr = table_rows(ethane)
     check("hindered rotor: changes S against the harmonic torsion",
           len(h) == len(hr) == 3 and all(abs(a["S"] - b["S"]) > 0.1 for a, b in zip(h, hr)), f"{h} {hr}")
+
+# Scan rotors: the fit's residuals are noted; a bumped point and a wrong period are warned
+# about on stderr (threshold 0.2 kJ/mol, README "Hindered internal rotors").
+with tempfile.TemporaryDirectory() as tmp:
+    text = open(ethane).read()
+    head = text[:text.index("hindered_rotors:")]
+    def scan_yaml(name, points, symmetry=3):
+        path = os.path.join(tmp, name)
+        pts = ", ".join(f"[{a}, {e:.6f}]" for a, e in points)
+        open(path, "w").write(head + f"hindered_rotors:\n  - {{bond: [1, 2], symmetry: {symmetry}, "
+                              f"scan: [{pts}], replaces: 289}}\n")
+        return path
+    cosine = [(a, 6.0 * (1 - math.cos(math.radians(3 * a)))) for a in range(0, 360, 10)]
+    r = run("inspect", scan_yaml("clean.yaml", cosine), "--format", "json")
+    notes = json.loads(r.stdout)["species"][0].get("notes", []) if r.returncode == 0 else []
+    check("scan rotor: note gives the fit's RMS and largest residual",
+          any("residual RMS 0.000 kJ/mol" in n for n in notes) and "warning" not in r.stderr, f"{notes} {r.stderr}")
+    bumped = [(a, e + (0.5 if a == 40 else 0.0)) for a, e in cosine]
+    r = run("table", scan_yaml("bumped.yaml", bumped), "--temps", "298.15")
+    check("scan rotor: a point 0.5 kJ/mol off is warned about (period and residual)",
+          r.returncode == 0 and "does not repeat every 120 deg" in r.stderr and "misses the scan by up to" in r.stderr,
+          r.stderr)
+    twofold = [(a, 6.0 * (1 - math.cos(math.radians(2 * a)))) for a in range(0, 360, 10)]
+    r = run("table", scan_yaml("twofold.yaml", twofold), "--temps", "298.15")
+    check("scan rotor: a two-fold scan declared three-fold is warned about",
+          r.returncode == 0 and "does not repeat every 120 deg (symmetry 3)" in r.stderr, r.stderr)
+
+# Methanol's OH rotor: the coupled reduced moment (default) is 6.5 % below the bond-axis
+# one (issue 7 figure; README "Hindered internal rotors") and the note gives both.
+with tempfile.TemporaryDirectory() as tmp:
+    text = open(os.path.join(root, "examples", "fuel-additive", "methanol.yaml")).read()
+    moments = {}
+    for moment in ("coupled", "bond_axis"):
+        path = os.path.join(tmp, moment + ".yaml")
+        open(path, "w").write(text + "hindered_rotors:\n  - {bond: [2, 1], symmetry: 3, barrier: 4.5, "
+                              f"replaces: 295, moment: {moment}}}\n")
+        r = run("inspect", path, "--format", "json")
+        notes = json.loads(r.stdout)["species"][0].get("notes", []) if r.returncode == 0 else []
+        found = [n for n in notes if "reduced moment" in n]
+        moments[moment] = float(found[0].split("reduced moment ")[1].split()[0]) if found else float("nan")
+        check(f"methanol rotor note names the {moment} moment",
+              len(found) == 1 and ("coupled to the overall rotation" in found[0]) == (moment == "coupled"), notes)
+    check("methanol rotor: coupled moment 6.5 % below the bond-axis one",
+          abs(moments["coupled"] / moments["bond_axis"] - 1 + 0.065) < 0.001, moments)
 
 # A misspelt subcommand: one line, exit 2, a suggestion; help states exit codes and defaults.
 r = run("tabel", water)
