@@ -104,6 +104,23 @@ with tempfile.TemporaryDirectory() as tmp:
         check(f"{file} of millions of entries: peak memory {rss:.0f} MB < 300 MB", rss < 300)
         os.remove(path)
 
+    # A QCSchema Hessian of 16 million numbers (658 MB before): refused by the value count.
+    qc = open(os.path.join(data, "water-model-hessian.json")).read()
+    start = qc.index('"return_result"')
+    open_bracket = qc.index("[", start)
+    close_bracket = qc.rindex("]", 0, qc.index('"properties"'))  # the end of return_result
+    path = os.path.join(tmp, "flood.json")
+    with open(path, "w") as f:
+        f.write(qc[:open_bracket] + "[0")
+        for _ in range(16):
+            f.write(",0" * 1_000_000)
+        f.write("]" + qc[close_bracket + 1:])
+    status, err, rss = run_measured("table", path, "-o", out)
+    refused("QCSchema array of 16 million numbers", status, err, "flood.json:", out)
+    check("QCSchema array of 16 million numbers: the value limit named", "JSON values" in err, err[:300])
+    check(f"QCSchema array of 16 million numbers: peak memory {rss:.0f} MB < 300 MB", rss < 300)
+    os.remove(path)
+
     # A species file over 32 MiB is refused before it is read (a sparse file: no disk used).
     huge = os.path.join(tmp, "huge.yaml")
     with open(huge, "w") as f:
