@@ -41,6 +41,8 @@ std::vector<Token> tokenize(std::string_view line, bool commas, std::size_t max_
   return tokens;
 }
 
+constexpr std::size_t max_xyz_lines = 100000;
+
 const std::vector<std::string> xyz_keys = {
     "name", "symmetry_number", "spin_multiplicity", "enthalpy_of_formation", "phase", "transition_state"};
 
@@ -157,6 +159,12 @@ Species XyzReader::read(const std::string& text) {
   if (rest.starts_with("\xEF\xBB\xBF")) rest.remove_prefix(3);
   while (!rest.empty()) {
     std::size_t newline = rest.find('\n');
+    // 2,000 atom lines and 6,000 frequencies leave a real file far below this; 32 MiB of
+    // blank lines once held 600 MB of line views.
+    if (lines.size() >= max_xyz_lines)
+      fail({file_, static_cast<int>(lines.size()) + 1, 1},
+           fmt::format("file has more than {} lines, expected an XYZ species file (2,000 atoms at most)",
+                       max_xyz_lines));
     lines.push_back(rest.substr(0, newline));
     if (newline == std::string_view::npos) break;
     rest.remove_prefix(newline + 1);

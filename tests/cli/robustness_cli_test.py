@@ -104,6 +104,17 @@ with tempfile.TemporaryDirectory() as tmp:
         check(f"{file} of millions of entries: peak memory {rss:.0f} MB < 300 MB", rss < 300)
         os.remove(path)
 
+    # An XYZ file of 32 million blank lines (600 MB of line views before): refused by its line count.
+    path = os.path.join(tmp, "blank.xyz")
+    with open(path, "w") as f:
+        f.write(open(os.path.join(data, "water.xyz")).read())
+        for _ in range(32):
+            f.write("\n" * 1_000_000)
+    status, err, rss = run_measured("table", path, "-o", out)
+    refused("XYZ file of 32 million blank lines", status, err, "blank.xyz:", out)
+    check(f"XYZ file of 32 million blank lines: peak memory {rss:.0f} MB < 300 MB", rss < 300)
+    os.remove(path)
+
     # A QCSchema Hessian of 16 million numbers (658 MB before): refused by the value count.
     qc = open(os.path.join(data, "water-model-hessian.json")).read()
     start = qc.index('"return_result"')
