@@ -5,6 +5,7 @@
 
 #include "vibtherm/bonds.hpp"
 #include "vibtherm/formation_data.hpp"
+#include "vibtherm/limits.hpp"
 
 namespace vibtherm {
 
@@ -68,6 +69,13 @@ FormationEnthalpy atomization_formation_enthalpy(const PreparedSpecies& prepared
     out.dfH298_J_per_mol += out.bond_correction_J_per_mol;
   }
   out.route = fmt::format("atomization with method '{}'", method.label);
+  // Every energy is finite, their sum need not be (an element energy of 1e308 hartree gave
+  // ΔfH° = -inf): a computed ΔfH° keeps the bound of a given one.
+  limits::check_range(out.dfH298_J_per_mol / 1e3, -limits::max_enthalpy_of_formation_J_per_mol / 1e3,
+                      limits::max_enthalpy_of_formation_J_per_mol / 1e3,
+                      fmt::format("species '{}': enthalpy of formation computed with method '{}'",
+                                  limits::display_name(s.name), limits::display_name(method.label)),
+                      "kJ/mol", s.origin);
   return out;
 }
 
@@ -98,6 +106,11 @@ PreparedSpecies prepare_with_method(const Species& species, const ModelOptions& 
 }
 
 void apply_reaction_formation(PreparedSpecies& p, double dfH298_J_per_mol, const std::string& route) {
+  limits::check_range(
+      dfH298_J_per_mol / 1e3, -limits::max_enthalpy_of_formation_J_per_mol / 1e3,
+      limits::max_enthalpy_of_formation_J_per_mol / 1e3,
+      fmt::format("species '{}': enthalpy of formation from {}", limits::display_name(p.species.name), route),
+      "kJ/mol", p.species.origin);
   auto& h = p.species.enthalpy_of_formation_J_per_mol;
   if (h && p.enthalpy_of_formation_route.empty()) {
     p.notes.push_back(fmt::format("enthalpy of formation {:.2f} kJ/mol as given; {} gives {:.2f} kJ/mol",

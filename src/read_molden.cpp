@@ -8,11 +8,13 @@
 #include <algorithm>
 #include <cctype>
 #include <cmath>
+#include <cstdint>
 #include <filesystem>
 #include <numeric>
 
 #include "vibtherm/constants.hpp"
 #include "vibtherm/elements.hpp"
+#include "vibtherm/read_species.hpp"
 #include "vibtherm/species_builder.hpp"
 #include "vibtherm/units.hpp"
 
@@ -126,7 +128,40 @@ std::vector<Section> MoldenReader::split(const std::string& text) const {
     } else if (out.empty()) {
       error(number, tokens[0].column, "text before [Molden Format], expected a Molden file to start with it");
     } else {
-      out.back().body.push_back({number, std::move(tokens)});
+      Section& s = out.back();
+      // Only the sections read below keep their lines (not basis sets or orbitals), and a
+      // list longer than a species may have is refused at its first line too many: a 32 MiB
+      // [FREQ] of 16 million lines once took 1.2 GB before its count was checked.
+      const bool per_mode = s.name == "freq" || s.name == "int";
+      const bool per_atom = s.name == "fr-coord" || s.name == "atoms";
+      if (!per_mode && !per_atom && s.name != "fr-norm-coord") continue;
+      std::size_t cap = per_mode ? max_species_frequencies : per_atom ? max_species_atoms : SIZE_MAX;
+      if (!per_mode && !per_atom) {
+        // [FR-NORM-COORD] after [FREQ] and the geometry (the usual order): a header and a line
+        // per atom for each mode, so a flood is refused at its first line too many.
+        std::size_t modes = 0;
+        std::size_t atoms = 0;
+        for (const Section& seen : out) {
+          if (seen.name == "freq") modes = seen.body.size();
+          if (seen.name == "fr-coord" || (seen.name == "atoms" && atoms == 0)) atoms = seen.body.size();
+        }
+        if (modes > 0 && atoms > 0 && s.body.size() >= modes * (atoms + 1))
+          error(number, tokens[0].column,
+                fmt::format(
+                    "[FR-NORM-COORD] has more than {} lines, expected {} modes of a 'vibration' line and "
+                    "{} lines of x y z",
+                    modes * (atoms + 1), modes, atoms));
+      }
+      if (s.body.size() >= cap) {
+        const char* header = s.name == "freq"       ? "[FREQ]"
+                             : s.name == "int"      ? "[INT]"
+                             : s.name == "fr-coord" ? "[FR-COORD]"
+                                                    : "[Atoms]";
+        error(number, tokens[0].column,
+              fmt::format("{} has more than {} lines, more than the {} {} this version accepts", header, cap,
+                          cap, per_mode ? "frequencies" : "atoms"));
+      }
+      s.body.push_back({number, std::move(tokens)});
     }
   }
   if (out.empty())

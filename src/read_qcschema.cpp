@@ -11,6 +11,7 @@
 #include "json_location.hpp"
 #include "vibtherm/constants.hpp"
 #include "vibtherm/elements.hpp"
+#include "vibtherm/read_species.hpp"
 #include "vibtherm/species_builder.hpp"
 #include "vibtherm/units.hpp"
 
@@ -230,8 +231,32 @@ std::vector<double> QcReader::hessian(const json& h, const JsonPath& path, std::
   return symmetrised_hessian(full, n, *to_force_constant_J_per_m2(1.0, "hartree/bohr^2"));
 }
 
+// Every JSON value but the first follows a ',' or opens a container, outside strings; so
+// counting those characters bounds the values of the tree before it is built, and the
+// file is refused at the one past max_json_values.
+void check_json_value_count(const std::string& text, const std::string& file) {
+  std::size_t values = 1;
+  bool in_string = false;
+  for (std::size_t i = 0; i < text.size(); ++i) {
+    const char c = text[i];
+    if (in_string) {
+      if (c == '\\')
+        ++i;
+      else if (c == '"')
+        in_string = false;
+    } else if (c == '"') {
+      in_string = true;
+    } else if ((c == ',' || c == '[' || c == '{') && ++values > max_json_values) {
+      const auto [line, column] = line_column_at(text, i);
+      fail({file, line, column},
+           fmt::format("file holds more than {} JSON values, expected fewer", max_json_values));
+    }
+  }
+}
+
 Species QcReader::read(bool geometry_only) {
   require_text(text_, file_);
+  check_json_value_count(text_, file_);
   json root;
   try {
     root = json::parse(text_);

@@ -1,11 +1,15 @@
 // The XYZ-plus-frequencies species reader; the format is described in read_xyz.hpp.
 #include "vibtherm/read_xyz.hpp"
 
+#include <fmt/format.h>
+
 #include <algorithm>
 #include <charconv>
+#include <cstdint>
 #include <filesystem>
 #include <set>
 
+#include "vibtherm/read_species.hpp"
 #include "vibtherm/species_builder.hpp"
 #include "vibtherm/spelling.hpp"
 #include "vibtherm/units.hpp"
@@ -18,12 +22,13 @@ struct Token {
   int column;  // 1-based
 };
 
-// Splits a line into tokens at blanks (and commas when `commas`), dropping a `#` comment.
-std::vector<Token> tokenize(std::string_view line, bool commas) {
+// Splits a line into tokens at blanks (and commas when `commas`), dropping a `#` comment;
+// at most `max_tokens` of them (a line of millions of numbers stops there).
+std::vector<Token> tokenize(std::string_view line, bool commas, std::size_t max_tokens = SIZE_MAX) {
   std::vector<Token> tokens;
   std::size_t i = 0;
   auto separator = [&](char c) { return c == ' ' || c == '\t' || c == '\r' || (commas && c == ','); };
-  while (i < line.size()) {
+  while (i < line.size() && tokens.size() < max_tokens) {
     if (line[i] == '#') break;
     if (separator(line[i])) {
       ++i;
@@ -35,6 +40,8 @@ std::vector<Token> tokenize(std::string_view line, bool commas) {
   }
   return tokens;
 }
+
+constexpr std::size_t max_xyz_lines = 100000;
 
 const std::vector<std::string> xyz_keys = {
     "name", "symmetry_number", "spin_multiplicity", "enthalpy_of_formation", "phase", "transition_state"};
@@ -152,6 +159,12 @@ Species XyzReader::read(const std::string& text) {
   if (rest.starts_with("\xEF\xBB\xBF")) rest.remove_prefix(3);
   while (!rest.empty()) {
     std::size_t newline = rest.find('\n');
+    // 2,000 atom lines and 6,000 frequencies leave a real file far below this; 32 MiB of
+    // blank lines once held 600 MB of line views.
+    if (lines.size() >= max_xyz_lines)
+      fail({file_, static_cast<int>(lines.size()) + 1, 1},
+           fmt::format("file has more than {} lines, expected an XYZ species file (2,000 atoms at most)",
+                       max_xyz_lines));
     lines.push_back(rest.substr(0, newline));
     if (newline == std::string_view::npos) break;
     rest.remove_prefix(newline + 1);
@@ -236,10 +249,16 @@ Species XyzReader::read(const std::string& text) {
   }
   for (++index; index < lines.size(); ++index) {
     int ln = line_number(index);
-    for (const Token& token : tokenize(lines[index], true)) {
+    // One token more than the limit allows, so that the error below can point at it.
+    const std::size_t room = max_species_frequencies + 1 - species.frequencies_cm1.size();
+    for (const Token& token : tokenize(lines[index], true, room)) {
       double value = number(token, ln, "frequency");
       if (value == 0.0)
         error(ln, token.column, "frequency is 0, expected a non-zero wavenumber (negative for imaginary)");
+      if (species.frequencies_cm1.size() >= max_species_frequencies)
+        error(
+            ln, token.column,
+            fmt::format("more than {} frequencies, more than this version accepts", max_species_frequencies));
       species.frequencies_cm1.push_back(*to_wavenumber_cm1(value, unit));
     }
   }

@@ -165,7 +165,11 @@ void YamlReader::ensemble(const Entries& e, Species& species) const {
     c.relative_energy_J_per_mol = energy_J_per_mol(*energy, what + " 'relative_energy'");
     const std::string path = (here / c.file).string();
     if (!std::filesystem::is_regular_file(path))
-      error(*f, what + " file " + quote(c.file) + " does not exist (paths are relative to this file)");
+      error(*f,
+            what + " file " + quote(c.file) +
+                (std::filesystem::exists(path)
+                     ? " is not a regular file (a directory, device, FIFO or socket), expected a species file"
+                     : " does not exist (paths are relative to this file)"));
     c.species = read_species_file(path);
     if (!c.species.conformers.empty())
       error(*f, what + " file " + quote(c.file) + " is itself an ensemble, expected one structure");
@@ -195,7 +199,10 @@ Species YamlReader::from_file(const Entries& e, const YAML::Node& node) const {
                                          ? std::filesystem::path(given)
                                          : std::filesystem::path(file()).parent_path() / given;
   if (!std::filesystem::is_regular_file(path))
-    error(node, "'from' file " + quote(given) + " does not exist (paths are relative to this file)");
+    error(node, "'from' file " + quote(given) +
+                    (std::filesystem::exists(path) ? " is not a regular file (a directory, device, FIFO or "
+                                                     "socket), expected a QCSchema or Molden file"
+                                                   : " does not exist (paths are relative to this file)"));
   return read_exchange_file(path.string());
 }
 

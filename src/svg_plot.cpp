@@ -113,27 +113,91 @@ std::pair<double, double> nice_interval(double low, double high, int max_ticks) 
   return {std::floor(low / step + 1e-9) * step, std::ceil(high / step - 1e-9) * step};
 }
 
+std::string num(double value) {
+  long tenths = std::isfinite(value) ? std::lround(value * 10.0) : 0;
+  std::string out = tenths < 0 ? "-" : "";
+  const unsigned long magnitude = static_cast<unsigned long>(tenths < 0 ? -tenths : tenths);
+  if (magnitude >= 10) out += fmt::format("{}", magnitude / 10);
+  if (magnitude % 10 != 0) out += fmt::format(".{}", magnitude % 10);
+  if (magnitude == 0) out = "0";
+  return out;
+}
+
+const char* style_rules() { return ".halo{stroke:#fff;stroke-width:3px;paint-order:stroke;fill:#444}"; }
+
 std::string text(double x, double y, std::string_view content, double font_px, std::string_view anchor,
                  std::string_view extra_attributes) {
-  return fmt::format(R"(<text x="{:.1f}" y="{:.1f}" font-size="{:g}"{}{}>{}</text>)", x, y, font_px,
+  return fmt::format(R"(<text x="{}" y="{}"{}{}{}>{}</text>)", num(x), num(y),
+                     font_px == font_default ? std::string() : fmt::format(R"( font-size="{:g}")", font_px),
                      anchor == "start" ? std::string() : fmt::format(R"( text-anchor="{}")", anchor),
                      attributes(extra_attributes), escape_markup(content));
 }
 
-std::string polyline(const std::vector<std::pair<double, double>>& points_px, std::string_view css_class,
+std::vector<std::pair<double, double>> simplified(const std::vector<std::pair<double, double>>& points,
+                                                  double tolerance_px) {
+  if (points.size() < 3) return points;
+  // Ramer-Douglas-Peucker (Ramer 1972; Douglas & Peucker 1973), with an explicit stack.
+  std::vector<char> keep(points.size(), 0);
+  keep.front() = keep.back() = 1;
+  std::vector<std::pair<size_t, size_t>> spans{{0, points.size() - 1}};
+  while (!spans.empty()) {
+    const auto [a, b] = spans.back();
+    spans.pop_back();
+    const auto [ax, ay] = points[a];
+    const auto [bx, by] = points[b];
+    const double length = std::hypot(bx - ax, by - ay);
+    double farthest = -1.0;
+    size_t at = a;
+    for (size_t i = a + 1; i < b; ++i) {
+      const auto [px, py] = points[i];
+      const double d = length > 0.0 ? std::abs((bx - ax) * (ay - py) - (ax - px) * (by - ay)) / length
+                                    : std::hypot(px - ax, py - ay);
+      if (d > farthest) {
+        farthest = d;
+        at = i;
+      }
+    }
+    if (farthest > tolerance_px) {
+      keep[at] = 1;
+      spans.emplace_back(a, at);
+      spans.emplace_back(at, b);
+    }
+  }
+  std::vector<std::pair<double, double>> out;
+  for (size_t i = 0; i < points.size(); ++i)
+    if (keep[i]) out.push_back(points[i]);
+  return out;
+}
+
+std::string polyline(const std::vector<std::pair<double, double>>& all_points_px, std::string_view css_class,
                      std::string_view colour, double width, std::string_view dash) {
-  std::string out =
-      fmt::format(R"(<polyline class="{}" fill="none" stroke="{}" stroke-width="{:g}"{} points=")", css_class,
-                  colour, width, dash_attribute(dash));
-  for (size_t i = 0; i < points_px.size(); ++i)
-    out += fmt::format("{}{:.1f},{:.1f}", i ? " " : "", points_px[i].first, points_px[i].second);
+  const auto points_px = simplified(all_points_px, curve_tolerance_px);
+  std::string out = fmt::format(R"(<path class="{}" fill="none" stroke="{}" stroke-width="{:g}"{} d=")",
+                                css_class, colour, width, dash_attribute(dash));
+  // Relative moves between positions rounded to tenths: short, and exact (no rounding drift).
+  long px = 0, py = 0;
+  for (size_t i = 0; i < points_px.size(); ++i) {
+    const long x = std::lround(points_px[i].first * 10.0), y = std::lround(points_px[i].second * 10.0);
+    if (i == 0) {
+      out += "M" + num(x / 10.0) + " " + num(y / 10.0) + (points_px.size() > 1 ? "l" : "");
+    } else {
+      const std::string dx = num((x - px) / 10.0), dy = num((y - py) / 10.0);
+      if (i > 1 && dx[0] != '-') out += ' ';  // a sign separates numbers, a point might not everywhere
+      out += dx;
+      if (dy[0] != '-') out += ' ';
+      out += dy;
+    }
+    px = x;
+    py = y;
+  }
   return out + "\"/>\n";
 }
 
 std::string line(double x1, double y1, double x2, double y2, std::string_view colour, double width,
                  std::string_view dash) {
-  return fmt::format(R"(<line x1="{:.1f}" y1="{:.1f}" x2="{:.1f}" y2="{:.1f}" stroke="{}"{}{}/>)", x1, y1, x2,
-                     y2, colour, width == 1.0 ? std::string() : fmt::format(R"( stroke-width="{:g}")", width),
+  return fmt::format(R"(<line x1="{}" y1="{}" x2="{}" y2="{}" stroke="{}"{}{}/>)", num(x1), num(y1), num(x2),
+                     num(y2), colour,
+                     width == 1.0 ? std::string() : fmt::format(R"( stroke-width="{:g}")", width),
                      dash_attribute(dash));
 }
 
@@ -141,42 +205,41 @@ void plot_box(std::string& out, const Axis& x, const Axis& y, double top, double
               std::string_view y_title) {
   // The grid as one path: a few dozen lines per picture, each a short path command.
   std::string grid;
-  for (double t : x.ticks()) grid += fmt::format("M{:.1f} {:.1f}V{:.1f}", x(t), top, bottom);
-  for (double v : y.ticks(5)) grid += fmt::format("M{:.1f} {:.1f}H{:.1f}", plot_left, y(v), plot_right);
-  out += fmt::format(R"(<path class="grid" d="{}" stroke="#dddddd" fill="none"/>)", grid);
-  out += "\n<g class=\"y-axis\">";
+  for (double t : x.ticks()) grid += "M" + num(x(t)) + " " + num(top) + "V" + num(bottom);
+  for (double v : y.ticks(5)) grid += "M" + num(plot_left) + " " + num(y(v)) + "H" + num(plot_right);
+  out += fmt::format(R"(<path class="grid" d="{}" stroke="#ddd" fill="none"/>)", grid);
+  out += "\n<g class=\"y-axis\" text-anchor=\"end\">";
   double last = 1e300;
   for (double v : y.ticks(5)) {
     const double py = y(v);
     if (std::abs(last - py) < font_tick + 2) continue;
-    out += text(plot_left - 6, py + 4, fmt::format("{:g}", v), font_tick, "end");
+    out += text(plot_left - 6, py + 4, fmt::format("{:g}", v), font_tick);  // the group's anchor
     last = py;
   }
-  out += fmt::format(R"~(<text transform="translate({:.1f},{:.1f}) rotate(-90)" text-anchor="middle" )~"
+  out += fmt::format(R"~(<text transform="translate({},{}) rotate(-90)" text-anchor="middle" )~"
                      R"(font-size="{:g}">{}</text>)",
-                     plot_left - 58, 0.5 * (top + bottom), font_label, escape_markup(y_title));
+                     num(plot_left - 58), num(0.5 * (top + bottom)), font_label, escape_markup(y_title));
   out += "</g>\n";
   out +=
-      fmt::format(R"(<rect class="frame" x="{:.1f}" y="{:.1f}" width="{:.1f}" height="{:.1f}" fill="none" )"
-                  R"(stroke="#333333"/>)",
-                  plot_left, top, plot_right - plot_left, bottom - top);
+      fmt::format(R"(<rect class="frame" x="{}" y="{}" width="{}" height="{}" fill="none" stroke="#333"/>)",
+                  num(plot_left), num(top), num(plot_right - plot_left), num(bottom - top));
   out += '\n';
 }
 
 double x_axis_labels(std::string& out, const Axis& x, double y_axis, std::string_view title) {
-  out += R"(<g class="x-axis">)";
+  out += R"(<g class="x-axis" text-anchor="middle">)";
   double right_edge = -1e300;
   std::string marks;
   for (double t : x.ticks()) {
     const std::string label = fmt::format("{:g}", t);
     const double w = text_width(label, font_tick);
     if (x(t) - 0.5 * w < right_edge + 6) continue;
-    marks += fmt::format("M{:.1f} {:.1f}v4", x(t), y_axis);
-    out += text(x(t), y_axis + 17, label, font_tick, "middle");
+    marks += "M" + num(x(t)) + " " + num(y_axis) + "v4";
+    out += text(x(t), y_axis + 17, label, font_tick);
     right_edge = x(t) + 0.5 * w;
   }
-  if (!marks.empty()) out += fmt::format(R"(<path d="{}" stroke="#333333"/>)", marks);
-  out += text(0.5 * (plot_left + plot_right), y_axis + 36, title, font_label, "middle");
+  if (!marks.empty()) out += fmt::format(R"(<path d="{}" stroke="#333"/>)", marks);
+  out += text(0.5 * (plot_left + plot_right), y_axis + 36, title, font_label);
   out += "</g>\n";
   return 44.0;
 }
@@ -193,11 +256,10 @@ double legend(std::string& out, const std::vector<LegendEntry>& entries, double 
       cy += row;
     }
     if (e.ring)
-      out +=
-          fmt::format(R"(<circle cx="{:.1f}" cy="{:.1f}" r="4" fill="none" stroke="{}" stroke-width="1.5"/>)",
-                      cx + 0.5 * sample, cy, e.colour);
+      out += fmt::format(R"(<circle cx="{}" cy="{}" r="4" fill="none" stroke="{}" stroke-width="1.5"/>)",
+                         num(cx + 0.5 * sample), num(cy), e.colour);
     else if (e.width <= 0.0)
-      out += fmt::format(R"(<rect x="{:.1f}" y="{:.1f}" width="{:g}" height="10" fill="{}"/>)", cx, cy - 5,
+      out += fmt::format(R"(<rect x="{}" y="{}" width="{:g}" height="10" fill="{}"/>)", num(cx), num(cy - 5),
                          sample, e.colour);
     else
       out += line(cx, cy, cx + sample, cy, e.colour, e.width, e.dash);
@@ -208,50 +270,69 @@ double legend(std::string& out, const std::vector<LegendEntry>& entries, double 
   return cy - top + 14;
 }
 
-std::string heat_row(GradientBook& book, const std::vector<double>& x_px, const std::vector<double>& values,
-                     double left, double right, double top, double height) {
-  // Stops where the value has moved by a fiftieth since the last stop (and at both ends):
-  // the browser interpolates between them, so a row is a few dozen stops, not a cell per sample.
-  std::string stops, first_colour;
-  bool uniform = true;
+std::string viridis_gradient(std::string_view id, const std::vector<double>& x_px,
+                             const std::vector<double>& values, double x_from, double x_to,
+                             double resolution) {
+  std::string stops;
   double last = -1.0;
   for (size_t i = 0; i < values.size(); ++i) {
     const double v = std::clamp(values[i], 0.0, 1.0);
     const bool end = i == 0 || i + 1 == values.size();
-    if (!end && std::abs(v - last) < 0.02) continue;
-    const std::string colour = viridis_hex(v);
-    if (first_colour.empty()) first_colour = colour;
-    uniform = uniform && colour == first_colour;
-    stops += fmt::format(R"(<stop offset="{:.4f}" stop-color="{}"/>)",
-                         std::clamp((x_px[i] - left) / (right - left), 0.0, 1.0), colour);
+    if (!end && std::abs(v - last) < resolution) continue;
+    const long thousandths = std::lround(1000.0 * std::clamp((x_px[i] - x_from) / (x_to - x_from), 0.0, 1.0));
+    const std::string offset = thousandths == 0      ? std::string("0")
+                               : thousandths == 1000 ? std::string("1")
+                                                     : fmt::format(".{:03d}", thousandths);
+    stops += fmt::format(R"(<stop offset="{}" stop-color="{}"/>)", offset, viridis_hex(v));
     last = v;
   }
-  std::string fill = first_colour;
+  return fmt::format(
+      R"(<linearGradient id="{}" gradientUnits="userSpaceOnUse" x1="{}" y1="0" x2="{}" y2="0">{})"
+      "</linearGradient>\n",
+      escape_markup(id), num(x_from), num(x_to), stops);
+}
+
+std::string heat_row(GradientBook& book, const std::vector<double>& x_px, const std::vector<double>& values,
+                     double left, double right, double top, double height) {
+  // Stops where the value has moved by a fiftieth since the last stop (and at both ends):
+  // the browser interpolates between them, so a row is a few dozen stops, not a cell per sample.
+  const std::string first = viridis_hex(values.empty() ? 0.0 : values.front());
+  bool uniform = true;
+  for (const double v : values) uniform = uniform && viridis_hex(v) == first;
+  std::string fill = first;
   if (!uniform) {
+    // The stop list without the id is the key: identical rows share one gradient.
+    const std::string key = viridis_gradient("", x_px, values, left, right, 0.02);
     auto it =
-        std::find_if(book.known.begin(), book.known.end(), [&](const auto& k) { return k.first == stops; });
+        std::find_if(book.known.begin(), book.known.end(), [&](const auto& k) { return k.first == key; });
     if (it == book.known.end()) {
       const std::string id = fmt::format("{}row{}", book.id_prefix, book.known.size() + 1);
-      book.defs += fmt::format(
-          R"(<linearGradient id="{}" gradientUnits="userSpaceOnUse" x1="{:.1f}" y1="0" x2="{:.1f}" y2="0">{})"
-          "</linearGradient>\n",
-          escape_markup(id), left, right, stops);
-      book.known.emplace_back(stops, id);
+      book.defs += viridis_gradient(id, x_px, values, left, right, 0.02);
+      book.known.emplace_back(key, id);
       it = book.known.end() - 1;
     }
     fill = fmt::format("url(#{})", escape_markup(it->second));
   }
-  return fmt::format(R"(<rect x="{:.1f}" y="{:.1f}" width="{:.1f}" height="{:.1f}" fill="{}"/>)", left, top,
-                     right - left, height, fill);
+  return fmt::format(R"(<rect x="{}" y="{}" width="{}" height="{}" fill="{}"/>)", num(left), num(top),
+                     num(right - left), num(height), fill);
+}
+
+std::string shifted_heat_row(std::string_view gradient_id, double shift_px, double left, double right,
+                             double top, double height) {
+  const double shift = std::round(10.0 * shift_px) / 10.0;  // x + shift is `left` to the tenth
+  return fmt::format(
+      R"~(<rect x="{}" y="{}" width="{}" height="{}" transform="translate({})" fill="url(#{})"/>)~",
+      num(left - shift), num(top), num(right - left), num(height), num(shift), escape_markup(gradient_id));
 }
 
 std::string open_svg(double height, bool standalone, std::string_view css_class, std::string_view title) {
   std::string out = standalone ? "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" : "";
   out += fmt::format(R"(<svg{} class="{}" width="{:.0f}" height="{:.0f}" viewBox="0 0 {:.0f} {:.0f}" )"
-                     R"(font-family="DejaVu Sans, Verdana, sans-serif" role="img">)",
+                     R"(font-family="DejaVu Sans, Verdana, sans-serif" font-size="{:g}" role="img">)",
                      standalone ? R"( xmlns="http://www.w3.org/2000/svg")" : "", css_class, figure_width,
-                     std::ceil(height), figure_width, std::ceil(height));
+                     std::ceil(height), figure_width, std::ceil(height), font_default);
   out += fmt::format("\n<title>{}</title>\n", escape_markup(title));
+  if (standalone) out += fmt::format("<style>{}</style>\n", style_rules());
   out += R"(<rect width="100%" height="100%" fill="white"/>)";
   out += '\n';
   return out;

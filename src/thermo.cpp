@@ -331,6 +331,12 @@ class Evaluator {
 PreparedSpecies prepare_ensemble(const Species& species, const ModelOptions& options) {
   std::vector<ConformerMember> members;
   for (const Conformer& c : species.conformers) {
+    // 1e308 kJ/mol once gave NaN weights; a relative energy stays within the rotor bound.
+    limits::check_range(
+        c.relative_energy_J_per_mol / 1e3, -limits::max_conformer_energy_J_per_mol / 1e3,
+        limits::max_conformer_energy_J_per_mol / 1e3,
+        fmt::format("conformer {} ('{}') relative energy", members.size() + 1, limits::display_name(c.file)),
+        "kJ/mol", c.where.file.empty() ? species.origin : c.where);
     Species s = c.species;
     if (!s.low_frequency) s.low_frequency = species.low_frequency;
     if (s.scale.empty()) s.scale = species.scale;

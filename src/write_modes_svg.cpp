@@ -70,9 +70,8 @@ double colour_bar(std::string& out, const ModesReport& r, const std::string& ram
                                r.thresholds.frozen_below_Cv_over_R, r.thresholds.active_above_Cv_over_R),
                    font_tick);
   const double bar_top = top + 20;
-  out += fmt::format(
-      R"~(<rect x="{:.1f}" y="{:.1f}" width="{:g}" height="{:g}" fill="url(#{})" stroke="#333333"/>)~",
-      plot_left, bar_top, width, height, escape_markup(ramp_id));
+  out += fmt::format(R"~(<rect x="{}" y="{}" width="{:g}" height="{:g}" fill="url(#{})" stroke="#333"/>)~",
+                     svg::num(plot_left), svg::num(bar_top), width, height, escape_markup(ramp_id));
   const std::vector<std::pair<double, std::string>> marks{
       {0.0, "0"},
       {r.thresholds.frozen_below_Cv_over_R, fmt::format("{:g}", r.thresholds.frozen_below_Cv_over_R)},
@@ -83,7 +82,7 @@ double colour_bar(std::string& out, const ModesReport& r, const std::string& ram
   for (const auto& [value, label] : marks) {
     const double x = plot_left + width * value;
     const double w = svg::text_width(label, font_tick);
-    out += svg::line(x, bar_top + height, x, bar_top + height + 4, "#333333");
+    out += svg::line(x, bar_top + height, x, bar_top + height + 4, "#333");
     if (x - 0.5 * w < right_edge + 4) continue;
     out += svg::text(x, bar_top + height + 17, label, font_tick, "middle");
     right_edge = x + 0.5 * w;
@@ -91,9 +90,42 @@ double colour_bar(std::string& out, const ModesReport& r, const std::string& ram
   return 20 + height + 24;
 }
 
+// On a logarithmic axis every harmonic row is one picture, shifted: its Cv/R is the Einstein
+// function of θ/T, so its colours depend on ln T − ln θ only. The shared gradient is that
+// function drawn for θ = the axis' low end from T/θ = 1/12 (Cv/R below 0.001) to 8 (above
+// 0.998), padded beyond by its end colours; a row then needs only its shift ln θ − ln low.
+struct HarmonicTemplate {
+  std::string id;
+  bool used = false;
+  static constexpr double from = 1.0 / 12.0, to = 8.0;
+};
+
+std::string harmonic_gradient(const std::string& id, const svg::Axis& x) {
+  std::vector<double> xs, values;
+  constexpr int samples = 400;
+  for (int k = 0; k <= samples; ++k) {
+    const double ratio = HarmonicTemplate::from * std::pow(HarmonicTemplate::to / HarmonicTemplate::from,
+                                                           static_cast<double>(k) / samples);
+    xs.push_back(x(x.low() * ratio));
+    values.push_back(einstein_Cv_over_R(1.0 / ratio));
+  }
+  return svg::viridis_gradient(id, xs, values, xs.front(), xs.back(), 1.0 / 48.0);
+}
+
+// Whether a row's sampled values are the shifted template's (within a fraction of a colour step):
+// harmonic modes are; a mode under a low-frequency treatment or scaled otherwise is drawn from its samples.
+bool is_harmonic_row(const ModesReport& r, size_t i, const Sampling& s) {
+  const ModeConstants& m = r.modes[i];
+  if (!s.log || !m.treatment.empty() || !(m.theta_K > 0.0)) return false;
+  for (size_t j : s.order)
+    if (std::abs(einstein_Cv_over_R(m.theta_K / r.points[j].T_K) - r.points[j].modes[i].Cv_over_R) > 2e-3)
+      return false;
+  return true;
+}
+
 // Heat map of Cv/R per vibration and per hindered rotor; returns the height used.
-double heat_map(std::string& out, svg::GradientBook& book, const ModesReport& r, const Sampling& s,
-                double top) {
+double heat_map(std::string& out, svg::GradientBook& book, HarmonicTemplate& shape, const ModesReport& r,
+                const Sampling& s, double top) {
   const svg::Axis x(s.low, s.high, s.log, plot_left, plot_right);
   const size_t n = r.modes.size() + r.rotors.size();
   // Whole pixels per row (no seams); at least 16 so every 12 px label has its own row.
@@ -103,24 +135,31 @@ double heat_map(std::string& out, svg::GradientBook& book, const ModesReport& r,
                        ? "Activation of each vibration, by ascending wavenumber"
                        : "Activation of each vibration (by ascending wavenumber) and hindered rotor",
                    font_title, "start", R"(font-weight="bold")");
-  out += svg::text(plot_left - 6, top + 14, "mode · cm⁻¹ · input #", font_tick, "end", R"(fill="#555555")");
+  out += svg::text(plot_left - 6, top + 14, "mode · cm⁻¹ · input #", font_tick, "end", R"(fill="#555")");
   const double map_top = top + 24;
-  // Column centres between samples: the gradient stops sit at the samples themselves.
   std::vector<double> xs;
   for (size_t j : s.order) xs.push_back(x(r.points[j].T_K));
   out += R"(<g class="heat-map" shape-rendering="crispEdges">)";
   out += '\n';
   for (size_t i = 0; i < n; ++i) {
     const double y = map_top + row * static_cast<double>(i);
-    std::vector<double> values;
     const bool is_mode = i < r.modes.size();
-    for (size_t j : s.order)
-      values.push_back(is_mode ? r.points[j].modes[i].Cv_over_R
-                               : r.points[j].rotors_Cv_over_R[i - r.modes.size()]);
-    out += svg::heat_row(book, xs, values, plot_left, plot_right, y, row);
+    if (is_mode && is_harmonic_row(r, i, s)) {
+      shape.used = true;
+      out +=
+          svg::shifted_heat_row(shape.id, x(r.modes[i].theta_K) - plot_left, plot_left, plot_right, y, row);
+    } else {
+      std::vector<double> values;
+      for (size_t j : s.order)
+        values.push_back(is_mode ? r.points[j].modes[i].Cv_over_R
+                                 : r.points[j].rotors_Cv_over_R[i - r.modes.size()]);
+      out += svg::heat_row(book, xs, values, plot_left, plot_right, y, row);
+    }
     out += '\n';
   }
-  out += "</g>\n<g class=\"row-labels\">";
+  // Row labels share their anchor, the half-activation rings their style, through their group.
+  out += "</g>\n<g class=\"row-labels\" text-anchor=\"end\">";
+  std::string rings;
   for (size_t i = 0; i < n; ++i) {
     const double y = map_top + row * static_cast<double>(i);
     std::string label;
@@ -133,21 +172,24 @@ double heat_map(std::string& out, svg::GradientBook& book, const ModesReport& r,
       const RotorConstants& rot = r.rotors[i - r.modes.size()];
       label = fmt::format("rotor {}–{}, σ = {}", rot.bond[0], rot.bond[1], rot.symmetry);
     }
-    out += svg::text(plot_left - 6, y + 0.5 * row + 4.5, label, font_tick, "end");
+    out += svg::text(plot_left - 6, y + 0.5 * row + 4.5, label, font_tick);
     if (i < r.modes.size()) {
       const double half = r.modes[i].half_active_at_K;
       if (half >= s.low && half <= s.high)
-        out += fmt::format(R"(<circle cx="{:.1f}" cy="{:.1f}" r="{:.1f}" fill="none" stroke="white" )"
-                           R"(stroke-width="1.5"/>)",
-                           x(half), y + 0.5 * row, std::min(4.0, 0.3 * row));
+        rings += fmt::format(R"(<circle cx="{}" cy="{}" r="{}"/>)", svg::num(x(half)),
+                             svg::num(y + 0.5 * row), svg::num(std::min(4.0, 0.3 * row)));
     }
   }
   out += "</g>\n";
+  if (!rings.empty())
+    out += R"(<g class="half-active" fill="none" stroke="white" stroke-width="1.5">)" + rings + "</g>\n";
   const double bottom = map_top + row * static_cast<double>(n);
-  out += fmt::format(
-      R"(<rect x="{:.1f}" y="{:.1f}" width="{:.1f}" height="{:.1f}" fill="none" stroke="#333333"/>)",
-      plot_left, map_top, plot_right - plot_left, bottom - map_top);
-  for (double t : x.ticks()) out += svg::line(x(t), map_top, x(t), bottom, "#ffffff", 0.6, "2 4");
+  out += fmt::format(R"(<rect x="{}" y="{}" width="{}" height="{}" fill="none" stroke="#333"/>)",
+                     svg::num(plot_left), svg::num(map_top), svg::num(plot_right - plot_left),
+                     svg::num(bottom - map_top));
+  std::string ticks;
+  for (double t : x.ticks()) ticks += "M" + svg::num(x(t)) + " " + svg::num(map_top) + "V" + svg::num(bottom);
+  out += fmt::format(R"(<path d="{}" stroke="#fff" stroke-width=".6" stroke-dasharray="2 4"/>)", ticks);
   out += '\n';
   double used = bottom - top;
   used += svg::x_axis_labels(out, x, bottom, s.axis_title());
@@ -191,8 +233,7 @@ double dof_curve(std::string& out, const ModesReport& r, const Sampling& s, doub
     const double py = y(value);
     out += svg::line(plot_left, py, plot_right, py, plateau_colour, 1.2, "6 4");
     const double ly = std::min(py - 5, last_label - (font_tick + 3));
-    out += svg::text(plot_right - 6, ly, label, font_tick, "end",
-                     R"(fill="#444444" stroke="white" stroke-width="3" paint-order="stroke")");
+    out += svg::text(plot_right - 6, ly, label, font_tick, "end", R"(class="halo")");
     last_label = ly;
   }
   out += "</g>\n";
@@ -236,6 +277,7 @@ std::string ramp_gradient(const std::string& id) {
 std::string modes_to_svg(const std::vector<ModesReport>& reports, const ModesSvgOptions& options) {
   std::string body;
   svg::GradientBook book{options.id_prefix, {}, {}};
+  std::string shapes;  // one harmonic template per species: the axis, hence the shift origin, is its own
   double y = 8.0;
   bool any_map = false;
   for (const ModesReport& r : reports) {
@@ -253,7 +295,10 @@ std::string modes_to_svg(const std::vector<ModesReport>& reports, const ModesSvg
       y += 34;
     }
     if (!r.modes.empty() || !r.rotors.empty()) {
-      y += heat_map(body, book, r, s, y) + 12;
+      HarmonicTemplate shape{fmt::format("{}h{}", options.id_prefix, &r - reports.data() + 1)};
+      y += heat_map(body, book, shape, r, s, y) + 12;
+      if (shape.used)
+        shapes += harmonic_gradient(shape.id, svg::Axis(s.low, s.high, s.log, plot_left, plot_right));
       any_map = true;
     }
     y += dof_curve(body, r, s, y) + 16;
@@ -262,7 +307,8 @@ std::string modes_to_svg(const std::vector<ModesReport>& reports, const ModesSvg
   std::string out =
       svg::open_svg(std::max(y, 40.0), options.standalone, "modes-plot",
                     "vibtherm modes: activation of vibrations and effective degrees of freedom");
-  if (any_map) out += "<defs>\n" + ramp_gradient(options.id_prefix + "ramp") + book.defs + "</defs>\n";
+  if (any_map)
+    out += "<defs>\n" + ramp_gradient(options.id_prefix + "ramp") + shapes + book.defs + "</defs>\n";
   out += body;
   out += "</svg>\n";
   return out;

@@ -8,6 +8,7 @@
 
 #include "vibtherm/markup.hpp"
 #include "vibtherm/point_group.hpp"
+#include "vibtherm/svg_plot.hpp"
 #include "vibtherm/write_modes_svg.hpp"
 #include "vibtherm/write_nasa7.hpp"
 #include "vibtherm/write_thermo_svg.hpp"
@@ -271,7 +272,8 @@ std::string write_report_html(const std::vector<ReportSpecies>& species, const R
       "<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\"/>\n"
       "<title>vibtherm report</title>\n<style>";
   out += style;
-  out += "</style>\n</head>\n<body>\n";
+  out += svg::style_rules();  // once for every picture on the page
+  out += "\n</style>\n</head>\n<body>\n";
   out += fmt::format("<h1>Thermochemistry report</h1>\n<p class=\"generator\">vibtherm {}, {} species.</p>\n",
                      escape_markup(header.version), species.size());
   out +=

@@ -76,7 +76,7 @@ void joints(std::string& out, const ReportSpecies& s, const svg::Axis& x, double
     out += svg::line(x(bp[i]), top, x(bp[i]), bottom, "#888888", 1.2, "2 3");
     if (label)
       out += svg::text(x(bp[i]) + 4, top + 15, fmt::format("joint {:g} K", bp[i]), font_tick, "start",
-                       R"(fill="#555555" stroke="white" stroke-width="3" paint-order="stroke")");
+                       R"(class="halo")");
   }
 }
 
@@ -147,7 +147,7 @@ std::string thermo_svg(const ReportSpecies& s, ThermoQuantity which, bool logari
     out += svg::text(
         plot_right - 6, r_top + 15,
         fmt::format("{} (largest |fit − computed| {:.3g} {})", q.residual_title, worst, q.unit_text),
-        font_tick, "end", R"(fill="#333333" stroke="white" stroke-width="3" paint-order="stroke")");
+        font_tick, "end", R"(class="halo")");
     entries.push_back({threshold_colour, 1.5, "5 3",
                        fmt::format("warning threshold ±{:g} {}", q.threshold, q.unit_text), false});
     r_bottom_edge = r_bottom;

@@ -20,30 +20,45 @@ inline std::string unescaped(const std::string& s) {
   return std::regex_replace(s, entity, "e");
 }
 
-// Every <text> without a transform (rotated axis titles are checked by position only).
+// Every <text> without a transform (rotated axis titles are checked by position only). Its
+// font-size and text-anchor are its own or inherited from the enclosing <g> and <svg> elements.
 inline std::vector<TextBox> text_boxes(const std::string& svg_text) {
-  static const std::regex element("<text ([^>]*)>([^<]*)</text>");
+  static const std::regex element(R"~(<(/?)(svg|g|text)\b([^>]*?)(/?)>(?:([^<]*)</text>)?)~");
   static const std::regex number(R"~(([a-z-]+)="([^"]*)")~");
+  struct Inherited {
+    double font = svg::font_default;  // what open_svg sets on the root
+    std::string anchor = "start";
+  };
+  std::vector<Inherited> stack{Inherited{}};
   std::vector<TextBox> out;
   for (auto it = std::sregex_iterator(svg_text.begin(), svg_text.end(), element);
        it != std::sregex_iterator(); ++it) {
-    const std::string attrs = (*it)[1], content = unescaped((*it)[2]);
-    double x = 0, y = 0, font = 0;
-    std::string anchor = "start";
+    const bool closing = (*it)[1].length() > 0, empty = (*it)[4].length() > 0;
+    const std::string tag = (*it)[2], attrs = (*it)[3], content = unescaped((*it)[5]);
+    if (closing) {
+      if (stack.size() > 1) stack.pop_back();
+      continue;
+    }
+    Inherited here = stack.back();
+    double x = 0, y = 0;
     bool rotated = false;
     for (auto a = std::sregex_iterator(attrs.begin(), attrs.end(), number); a != std::sregex_iterator();
          ++a) {
       const std::string key = (*a)[1], value = (*a)[2];
       if (key == "x") x = std::stod(value);
       if (key == "y") y = std::stod(value);
-      if (key == "font-size") font = std::stod(value);
-      if (key == "text-anchor") anchor = value;
+      if (key == "font-size") here.font = std::stod(value);
+      if (key == "text-anchor") here.anchor = value;
       if (key == "transform") rotated = true;
     }
+    if (tag != "text") {
+      if (!empty) stack.push_back(here);
+      continue;
+    }
     if (rotated) continue;
-    const double w = svg::text_width(content, font);
-    const double x0 = anchor == "end" ? x - w : anchor == "middle" ? x - 0.5 * w : x;
-    out.push_back({x0, y - 0.8 * font, x0 + w, y + 0.25 * font, font, content});
+    const double w = svg::text_width(content, here.font);
+    const double x0 = here.anchor == "end" ? x - w : here.anchor == "middle" ? x - 0.5 * w : x;
+    out.push_back({x0, y - 0.8 * here.font, x0 + w, y + 0.25 * here.font, here.font, content});
   }
   return out;
 }

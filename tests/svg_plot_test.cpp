@@ -57,6 +57,23 @@ TEST_CASE("heat rows: one rectangle each, identical rows share one gradient, fla
   CHECK(b.find("url(#p-row1)") != std::string::npos);
   CHECK(c.find("fill=\"#440154\"") != std::string::npos);
   CHECK(book.known.size() == 1);
-  CHECK(book.defs.find("<stop offset=\"0.0000\" stop-color=\"#440154\"/>") != std::string::npos);
-  CHECK(book.defs.find("<stop offset=\"1.0000\" stop-color=\"#fde725\"/>") != std::string::npos);
+  CHECK(book.defs.find("<stop offset=\"0\" stop-color=\"#440154\"/>") != std::string::npos);
+  CHECK(book.defs.find("<stop offset=\"1\" stop-color=\"#fde725\"/>") != std::string::npos);
+}
+
+TEST_CASE("compact numbers, simplified curves, shifted rows") {
+  CHECK(svg::num(176.0) == "176");
+  CHECK(svg::num(-0.44) == "-.4");
+  CHECK(svg::num(0.04) == "0");
+  CHECK(svg::num(-0.04) == "0");
+  CHECK(svg::num(12.25) == "12.3");
+  // A straight run loses its inner points; a corner stays (Ramer-Douglas-Peucker, common practice).
+  const std::vector<std::pair<double, double>> line{{0, 0}, {1, 1.05}, {2, 2}, {3, 3}, {4, 0}};
+  const auto kept = svg::simplified(line, 0.2);
+  CHECK(kept == std::vector<std::pair<double, double>>{{0, 0}, {3, 3}, {4, 0}});
+  // Relative moves between the rounded points: 0,0 → 3,3 → 4,0.
+  CHECK(svg::polyline(line, "c", "#000", 1).find(R"(d="M0 0l3 3 1-3")") != std::string::npos);
+  const std::string row = svg::shifted_heat_row("g", 123.44, 176, 770, 40, 16);
+  CHECK(row.find(R"(x="52.6")") != std::string::npos);  // 52.6 + 123.4 = 176
+  CHECK(row.find(R"~(transform="translate(123.4)")~") != std::string::npos);
 }

@@ -2,7 +2,9 @@
 
 #include <doctest/doctest.h>
 
+#include <array>
 #include <cmath>
+#include <regex>
 #include <string>
 
 #include "svg_layout.hpp"
@@ -54,7 +56,76 @@ ModesReport synthetic(int n, int rotors = 0) {
   return r;
 }
 
+struct HeatRow {
+  double x = 0, shift = 0;
+  std::string fill;
+};
+
+// The rectangles of the heat-map group: x, the translation of a shifted row, the fill.
+std::vector<HeatRow> heat_rows(const std::string& svg) {
+  std::vector<HeatRow> out;
+  const size_t from = svg.find("<g class=\"heat-map\""), to = svg.find("</g>", from);
+  static const std::regex rect(
+      R"~(<rect x="([-0-9.]+)"[^>]*?(?:transform="translate\(([-0-9.]+)\)")? fill="([^"]*)")~");
+  const std::string group = svg.substr(from, to - from);
+  for (auto it = std::sregex_iterator(group.begin(), group.end(), rect); it != std::sregex_iterator(); ++it)
+    out.push_back({std::stod((*it)[1]), (*it)[2].matched ? std::stod((*it)[2]) : 0.0, (*it)[3]});
+  return out;
+}
+
+// Colour of a userSpaceOnUse gradient `id` at x (pixels), interpolated in sRGB between its stops
+// and padded by its end colours, as a renderer draws it.
+std::array<double, 3> gradient_colour(const std::string& svg, const std::string& id, double x) {
+  const size_t at = svg.find("<linearGradient id=\"" + id + "\"");
+  const std::string g = svg.substr(at, svg.find("</linearGradient>", at) - at);
+  std::smatch m;
+  static const std::regex ends(R"~(x1="([-0-9.]+)" y1="0" x2="([-0-9.]+)")~");
+  std::regex_search(g, m, ends);
+  const double x1 = std::stod(m[1]), x2 = std::stod(m[2]);
+  static const std::regex stop(R"~(<stop offset="([0-9.]+)" stop-color="#([0-9a-f]{6})"/>)~");
+  std::vector<std::pair<double, std::array<double, 3>>> stops;
+  for (auto it = std::sregex_iterator(g.begin(), g.end(), stop); it != std::sregex_iterator(); ++it) {
+    const std::string hex = (*it)[2];
+    std::array<double, 3> c{};
+    for (int k = 0; k < 3; ++k)
+      c[static_cast<size_t>(k)] = std::stoi(hex.substr(2 * static_cast<size_t>(k), 2), nullptr, 16);
+    stops.emplace_back(std::stod((*it)[1]), c);
+  }
+  const double f = (x - x1) / (x2 - x1);
+  if (f <= stops.front().first) return stops.front().second;
+  for (size_t i = 1; i < stops.size(); ++i)
+    if (f <= stops[i].first) {
+      const double w = (f - stops[i - 1].first) / (stops[i].first - stops[i - 1].first);
+      std::array<double, 3> c{};
+      for (size_t k = 0; k < 3; ++k)
+        c[k] = stops[i - 1].second[k] + w * (stops[i].second[k] - stops[i - 1].second[k]);
+      return c;
+    }
+  return stops.back().second;
+}
+
 }  // namespace
+
+TEST_CASE("modes picture: a shifted harmonic row shows each mode's own Cv/R") {
+  // Every harmonic row shares one gradient (the Einstein function, Einstein 1907); read back at
+  // each sampled temperature it must give the colour of that mode's Cv/R there (viridis_hex).
+  const ModesReport r = synthetic(25);
+  const std::string svg = modes_to_svg({r});
+  const auto rows = heat_rows(svg);
+  REQUIRE(rows.size() == 25);
+  const svg::Axis x(r.points.front().T_K, r.points.back().T_K, true, svg::plot_left, svg::plot_right);
+  double worst = 0;
+  for (size_t i = 0; i < rows.size(); ++i) {
+    CHECK(rows[i].fill == "url(#h1)");
+    for (const ModesPoint& p : r.points) {
+      const auto shown = gradient_colour(svg, "h1", x(p.T_K) - rows[i].shift);
+      const std::string hex = svg::viridis_hex(p.modes[i].Cv_over_R);
+      for (size_t k = 0; k < 3; ++k)
+        worst = std::max(worst, std::abs(shown[k] - std::stoi(hex.substr(1 + 2 * k, 2), nullptr, 16)));
+    }
+  }
+  CHECK(worst <= 6.0);  // of 255 per channel: below a step the eye sees on the ramp
+}
 
 TEST_CASE("modes picture: labels never overlap, stay inside, and are at least 12 px, for 1 to 60 modes") {
   for (const auto& [modes, rotors] :
@@ -75,8 +146,10 @@ TEST_CASE("modes picture: labels never overlap, stay inside, and are at least 12
     }
     const auto clashes = test::overlaps(boxes);
     CHECK_MESSAGE(clashes.empty(), (clashes.empty() ? std::string() : clashes.front()));
-    // Every vibration and rotor has its labelled row, each a single rectangle.
-    CHECK(count_of(svg, "<rect x=\"176.0\"") >= static_cast<size_t>(modes + rotors));
+    // Every vibration and rotor has its labelled row, each a single rectangle over the plot box.
+    const auto rows = heat_rows(svg);
+    CHECK(rows.size() == static_cast<size_t>(modes + rotors));
+    for (const auto& r : rows) CHECK(r.x + r.shift == doctest::Approx(svg::plot_left).epsilon(1e-9));
     CHECK(count_of(svg, "<g") == count_of(svg, "</g>"));
   }
 }

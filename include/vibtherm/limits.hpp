@@ -28,6 +28,7 @@ inline constexpr double min_moment_amu_A2 = 1e-6;
 inline constexpr double max_moment_amu_A2 = 1e12;
 inline constexpr double max_enthalpy_of_formation_J_per_mol = 1e8;  // |ΔfH°| ≤ 100,000 kJ/mol
 inline constexpr double max_rotor_energy_J_per_mol = 1e6;           // barrier and scan, 1000 kJ/mol
+inline constexpr double max_conformer_energy_J_per_mol = 1e6;       // |relative energy|, 1000 kJ/mol
 inline constexpr int max_symmetry_number = 1000;
 // A hindered rotor's internal symmetry number, the period of its torsional potential: real
 // torsions have 1 to 6 (a methyl top 3, a C6 ring about its axis 6); 12 leaves room for a

@@ -23,6 +23,8 @@ inline constexpr std::size_t max_species_frequencies = 6000;
 // built: yaml-cpp's tree costs about 550 bytes per value, so this bounds it near 550 MB.
 // A full Hessian for up to 333 atoms (its lower triangle for up to 471) fits.
 inline constexpr std::size_t max_yaml_values = 1000000;
+// The same for a QCSchema JSON file (a 32 MiB array of 16 million numbers took 658 MB).
+inline constexpr std::size_t max_json_values = 1000000;
 
 // Reads a file, choosing the reader by content and extension (species_format.hpp). Only
 // regular files are read (not /dev/zero, a FIFO or a directory). When `bytes` is given it

@@ -25,6 +25,20 @@ inline constexpr double font_title = 14.0;
 // table's entries 0, 16, ..., 255. `value` is clamped to [0, 1].
 std::string viridis_hex(double value);
 
+// A coordinate or length as written in the pictures: rounded to a tenth of a pixel, with no
+// trailing ".0", no leading zero ("-.4") and no "-0", so that a page of a thousand species
+// stays small. SVG's number grammar reads every form.
+std::string num(double value);
+
+// The text size every picture's root element sets (a presentation attribute, inherited):
+// `text` leaves out the font-size of text in this size.
+inline constexpr double font_default = font_tick;
+
+// Style rules shared by every picture, by class: `halo` (a label over lines or colour, drawn
+// with a white outline). A standalone picture carries them in its own <style>; the report
+// puts them once in the page's style sheet.
+const char* style_rules();
+
 // Width of `text` in `font_px` sans-serif type, estimated generously (0.6 em per character,
 // counting UTF-8 code points) so that layouts built on it do not overlap.
 double text_width(std::string_view text, double font_px);
@@ -54,7 +68,15 @@ std::pair<double, double> nice_interval(double low, double high, int max_ticks =
 std::string text(double x, double y, std::string_view content, double font_px,
                  std::string_view anchor = "start", std::string_view extra_attributes = {});
 
-// A polyline through the points (pixels), stroke width and optional dash pattern.
+// The points of a curve that keep it within `tolerance_px` of every given point (the
+// Ramer-Douglas-Peucker simplification); the first and last always stay.
+std::vector<std::pair<double, double>> simplified(const std::vector<std::pair<double, double>>& points,
+                                                  double tolerance_px);
+inline constexpr double curve_tolerance_px = 0.2;  // a fifth of a pixel: no visible change
+
+// A curve through the points (pixels), simplified to within curve_tolerance_px, as one
+// <path> of relative moves between the rounded positions (no drift); stroke width and
+// optional dash pattern.
 std::string polyline(const std::vector<std::pair<double, double>>& points_px, std::string_view css_class,
                      std::string_view colour, double width, std::string_view dash = {});
 
@@ -85,7 +107,7 @@ double legend(std::string& out, const std::vector<LegendEntry>& entries, double 
 
 // Heat-map row: one rectangle whose fill is a horizontal gradient through the viridis colours
 // of `values` at the x positions (pixels, ascending). Identical rows share one gradient:
-// `defs` collects the gradients and `ids` remembers them (key = stop list).
+// `defs` collects the gradients and `known` remembers them (key = stop list).
 struct GradientBook {
   std::string id_prefix;
   std::string defs;
@@ -94,7 +116,21 @@ struct GradientBook {
 std::string heat_row(GradientBook& book, const std::vector<double>& x_px, const std::vector<double>& values,
                      double left, double right, double top, double height);
 
-// Opening tag of a picture; standalone adds the XML declaration and the namespace.
+// A gradient through the viridis colours of `values` at the x positions (pixels, ascending),
+// with userSpaceOnUse ends x_from and x_to and a stop wherever the value has moved by
+// `resolution` since the last one; the colours past its ends are those of its ends.
+std::string viridis_gradient(std::string_view id, const std::vector<double>& x_px,
+                             const std::vector<double>& values, double x_from, double x_to,
+                             double resolution);
+
+// Heat-map row filled by a gradient shared by rows of one shape, shifted by `shift_px`: a rectangle
+// [left, right] × [top, top + height] drawn at x − shift and translated back, so the fill moves
+// with the transform and the rectangle stays in place. One element per row, no gradient of its own.
+std::string shifted_heat_row(std::string_view gradient_id, double shift_px, double left, double right,
+                             double top, double height);
+
+// Opening tag of a picture (root font-size font_default); standalone adds the XML declaration,
+// the namespace and the style rules.
 std::string open_svg(double height, bool standalone, std::string_view css_class, std::string_view title);
 
 }  // namespace vibtherm::svg

@@ -6,7 +6,9 @@ FILE:LINE:COL, then ": error: ", at most 1,000 characters) besides any warnings,
 nothing; on 0 every number in the output, and in any warning on stderr, is finite (no nan
 or inf). Runs are not quiet (-q), so the warnings are checked too.
 
-Species files (.yaml, .xyz, QCSchema .json, Molden .molden) go through `table`, NASA files (.dat) through `eval`. The
+Species files (.yaml, .xyz, QCSchema .json, Molden .molden) go through `table`, and every
+fourth through `fit --allow-missing-hf` (read, prepare, tabulate, fit, write NASA-7), NASA
+files (.dat) through `eval`. The
 mutations are byte- and line-level edits (a number replaced by an extreme or non-finite
 value, lines deleted, duplicated or swapped, bytes flipped, YAML syntax inserted, the file
 cut short), one to three per input, from a fixed seed so a failure can be replayed.
@@ -78,8 +80,9 @@ ENV["UBSAN_OPTIONS"] = ":".join(filter(None, [ENV.get("UBSAN_OPTIONS", ""), f"ex
 
 def run_one(job):
     path, subcommand, out = job
+    extra = ["--allow-missing-hf"] if subcommand == "fit" else []
     try:
-        r = subprocess.run([exe, subcommand, os.path.basename(path), "-o", out], cwd=os.path.dirname(path),
+        r = subprocess.run([exe, subcommand, os.path.basename(path), *extra, "-o", out], cwd=os.path.dirname(path),
                            capture_output=True, timeout=60, env=ENV)
     except subprocess.TimeoutExpired:
         return f"{path}: no end within 60 s"
@@ -123,7 +126,8 @@ with tempfile.TemporaryDirectory() as tmp:
         path = os.path.join(work, f"mutant-{k:04d}-{stem}{ext}")
         with open(path, "wb") as f:
             f.write(mutate(text, rng))
-        jobs.append((path, "eval" if ext == ".dat" else "table", os.path.join(tmp, f"out-{k:04d}.txt")))
+        subcommand = "eval" if ext == ".dat" else "fit" if (k // len(seeds)) % 4 == 3 else "table"
+        jobs.append((path, subcommand, os.path.join(tmp, f"out-{k:04d}.txt")))
     with concurrent.futures.ThreadPoolExecutor(max_workers=os.cpu_count() or 2) as pool:
         results = list(pool.map(run_one, jobs))
     for (path, _, out), problem in zip(jobs, results):
