@@ -4,10 +4,14 @@ executable: every subcommand's --help states its temperatures, -q and the exit c
 top-level --help the exit codes once; the hindered rotors' part carries one name in table
 text, CSV and JSON, in modes text, CSV and JSON and in the README, and no other; an adsorbate's
 report section shows no rotor type, moments or rotational constants; the NASA-7 default
-breakpoint's Cp warning says when `--range TLOW:auto:THIGH` would not warn (fit and report).
+breakpoint's Cp warning says when `--range TLOW:auto:THIGH` would not warn (fit and report);
+the report names its input file with its SHA-256 and the options; modes are numbered by
+ascending wavenumber with the input position, the report's wavenumber list leaves out the
+mode a rotor replaces, and an imaginary mode is written one way (1500.0i) everywhere.
 
 Usage: messages_cli_test.py VIBTHERM_EXE PROJECT_ROOT
 """
+import hashlib
 import json
 import os
 import re
@@ -95,5 +99,40 @@ with tempfile.TemporaryDirectory() as tmp:
     r = run("report", floppy, "-q", "-o", page)
     html = open(page, encoding="utf-8").read() if r.returncode == 0 else ""
     check("report: the fit warnings carry the same advice", "--range 200:auto:3000 would not warn" in html)
+
+    # Input file, its SHA-256 and the options; the rotor's torsion (289 cm^-1) is not listed as a vibration.
+    r = run("report", ethane, "-q", "-o", page)
+    html = open(page, encoding="utf-8").read() if r.returncode == 0 else ""
+    digest = hashlib.sha256(open(ethane, "rb").read()).hexdigest()
+    check("report: input file and its SHA-256", f"<dt>input file</dt><dd>{ethane}</dd>" in html
+          and f"<dt>input SHA-256</dt><dd>{digest}</dd>" in html)
+    check("report: the options used", '<table class="options">' in html and "<code>--range</code>" in html)
+    used = re.search(r"<dt>vibrations used, ascending</dt><dd>([^<]*) cm⁻¹</dd>", html)
+    listed = [float(v) for v in used.group(1).split(", ")] if used else []
+    check("report: wavenumber list ascending, without the mode the rotor replaces",
+          len(listed) == 17 and listed == sorted(listed) and 289.0 not in listed, listed)
+
+# Modes by ascending wavenumber, each with its position in the input.
+m = modes.get("vibrations", [])
+order = [v["wavenumber"] for v in m]
+raw = re.search(r"frequencies: \[([^\]]*)\]", open(ethane, encoding="utf-8").read(), re.S)
+given = [float(v) for v in raw.group(1).replace("\n", " ").split(",")] if raw else []
+check("modes: numbered 1.. by ascending wavenumber, input position beside",
+      [v["index"] for v in m] == list(range(1, len(m) + 1)) and order == sorted(order)
+      and all(given[v["input_position"] - 1] == v["wavenumber"] for v in m), m[:2])
+
+# An imaginary mode is written 1500.0i in inspect text, messages and the report; never as -1500.
+ts = os.path.join(data, "model-ts-symmetric.yaml")
+r_inspect = run("inspect", ts)
+r_table = run("table", ts)
+with tempfile.TemporaryDirectory() as tmp:
+    page = os.path.join(tmp, "ts.html")
+    r_report = run("report", ts, "--allow-missing-hf", "-q", "-o", page)
+    html = open(page, encoding="utf-8").read() if r_report.returncode == 0 else ""
+for label, text in [("inspect text", r_inspect.stdout), ("table messages", r_table.stderr), ("report", html)]:
+    check(f"{label}: imaginary mode written 1500.0i, not -1500", "1500.0i" in text and "-1500" not in text,
+          text[:400])
+check("report: the imaginary mode listed as the reaction coordinate, left out",
+      "1500.0i (reaction coordinate, left out)" in html)
 
 checks.finish()
