@@ -33,9 +33,14 @@ std::optional<std::string> searched_breakpoint_advice(const PreparedSpecies& pre
   const double threshold = searched.options().thresholds.Cp_relative;
   const double worst = worst_Cp_error(fit.fit);
   if (worst <= threshold) return std::nullopt;
-  const SpeciesFit other = fit_species(prepared, searched);
-  const double best = worst_Cp_error(other.fit);
-  const auto& bp = other.fit.breakpoints_K;
+  // The searched plan differs only in the middle breakpoint, so its grid is the fit's own:
+  // the samples already tabulated are fitted again (the engine is not run twice).
+  bool same_grid = searched.grid_K().size() == fit.input.samples.size();
+  for (std::size_t i = 0; same_grid && i < fit.input.samples.size(); ++i)
+    same_grid = fit.input.samples[i].T_K == searched.grid_K()[i];
+  const FitResult other = same_grid ? fit_samples(fit.input, searched) : fit_species(prepared, searched).fit;
+  const double best = worst_Cp_error(other);
+  const auto& bp = other.breakpoints_K;
   const std::string range = fmt::format("--range {:g}:auto:{:g}", bp.front(), bp.back());
   if (best <= threshold)
     return fmt::format(

@@ -302,6 +302,7 @@ SpeciesFit fit_species(const PreparedSpecies& prepared, const FitPlan& plan) {
   in.bounds.upper_over_R = classical_Cv_over_R(prepared) + (prepared.is_gas ? 1.0 : 0.0);
 
   out.fit = fit_samples(in, plan);
+  out.input = std::move(in);
   out.molar_mass_g_per_mol = species_molar_mass_g_per_mol(sp);
   const auto composition = species_composition(sp);
 

@@ -125,6 +125,7 @@ struct SpeciesFit {
   double H298_minus_H0_J_per_mol = 0.0;
   double molar_mass_g_per_mol = 0.0;
   std::vector<std::string> notes;  // also written into the output's note/comment field
+  FitInput input;                  // the samples fitted: another plan on the same grid reuses them
 };
 
 // Tabulates the engine on the grid and fits. Throws InputError (at the species file)
