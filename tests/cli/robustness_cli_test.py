@@ -54,17 +54,17 @@ with tempfile.TemporaryDirectory() as tmp:
     # Manifests that list each other: 17 manifests x 4 lines once expanded to 4^17 paths and
     # ended in std::bad_alloc. Refused at the manifest read that passes the limit.
     open(os.path.join(tmp, "w.yaml"), "w").write(water_text)
-    for i in range(1, 18):
-        entry = f"m{i + 1}.list" if i < 17 else "w.yaml"
-        open(os.path.join(tmp, f"m{i}.list"), "w").write((entry + "\n") * 4)
-    status, err, rss = run_measured("table", "m1.list", "-o", out, cwd=tmp)
+    def manifest_chain(prefix, depth):
+        """prefix1.list .. prefix{depth}.list, each naming the next four times, the last w.yaml."""
+        for i in range(1, depth + 1):
+            entry = f"{prefix}{i + 1}.list" if i < depth else "w.yaml"
+            open(os.path.join(tmp, f"{prefix}{i}.list"), "w").write((entry + "\n") * 4)
+        return f"{prefix}1.list"
+    status, err, rss = run_measured("table", manifest_chain("m", 17), "-o", out, cwd=tmp)
     refused("17 manifests x 4 lines", status, err, ".list:", out)
     check(f"17 manifests x 4 lines: peak memory {rss:.0f} MB < 200 MB", rss < 200)
     # 12 deep (within the depth limit): 4^12 = 16.8 million paths, refused by the counts.
-    for i in range(1, 13):
-        entry = f"d{i + 1}.list" if i < 12 else "w.yaml"
-        open(os.path.join(tmp, f"d{i}.list"), "w").write((entry + "\n") * 4)
-    status, err, rss = run_measured("table", "d1.list", "-o", out, cwd=tmp)
+    status, err, rss = run_measured("table", manifest_chain("d", 12), "-o", out, cwd=tmp)
     refused("12 manifests x 4 lines", status, err, ".list:", out)
     check(f"12 manifests x 4 lines: peak memory {rss:.0f} MB < 200 MB", rss < 200)
 
