@@ -30,7 +30,7 @@ with tempfile.TemporaryDirectory() as tmp:
         best = float("inf")
         for _ in range(3):
             start = time.perf_counter()
-            subprocess.run([exe, *args, tmp, "-q", "-o", os.devnull], check=True)
+            subprocess.run([exe, *args, tmp, "-q", "-o", "-"], check=True, stdout=subprocess.DEVNULL)
             best = min(best, time.perf_counter() - start)
         return best
 

@@ -32,7 +32,7 @@ def run(*args):
     best = (float("inf"), 0.0)
     for _ in range(3):
         start = time.perf_counter()
-        p = subprocess.Popen([exe, *args, "-q", "-j", jobs, "-o", os.devnull])
+        p = subprocess.Popen([exe, *args, "-q", "-j", jobs, "-o", "-"], stdout=subprocess.DEVNULL)  # - is stdout: an output file must be a regular file
         _, status, usage = os.wait4(p.pid, 0)
         wall = time.perf_counter() - start
         if os.waitstatus_to_exitcode(status) != 0:
