@@ -103,6 +103,7 @@ void setup_fit(CLI::App& sub) {
           if (searched)
             if (auto advice = searched_breakpoint_advice(in.prepared, f, *searched))
               f.fit.warnings.push_back(*advice);
+          f.input = {};  // the samples served the advice; the batch keeps only results
           // Check that the record fits its format now, so one bad name fails one species.
           if (o->form == "nasa7") write_nasa7_record(std::get<Nasa7>(f.polynomial));
           if (o->form == "nasa9") write_nasa9_record(std::get<Nasa9>(f.polynomial));

@@ -82,6 +82,7 @@ void setup_report(CLI::App& sub) {
               ++r.warning_count;
               log.push_back({spdlog::level::warn, *advice});
             }
+          if (r.fit) r.fit->input = {};  // the samples served the advice; the batch keeps only results
           if (!r.fit)
             log.push_back(
                 {spdlog::level::warn, fmt::format("{}: {}", in.prepared.species.name, r.not_fitted_reason)});
