@@ -2,10 +2,14 @@
 // spin–orbit corrections, bond-additivity corrections (kJ/mol per bond) and scale factors.
 #include "vibtherm/read_method.hpp"
 
+#include <fmt/format.h>
 #include <yaml-cpp/yaml.h>
+
+#include <cmath>
 
 #include "vibtherm/bonds.hpp"
 #include "vibtherm/elements.hpp"
+#include "vibtherm/limits.hpp"
 #include "vibtherm/species_builder.hpp"
 #include "yaml_values.hpp"
 
@@ -63,9 +67,19 @@ Method read_method_yaml(const std::string& text, const std::string& file_name) {
     if (!energy) y.error(item.second, what + " has no 'energy', expected the free atom's electronic energy");
     MethodAtom atom;
     atom.where = y.at(item.first);
-    atom.energy_J_per_mol = y.energy_J_per_mol(*energy, what + " 'energy'", "hartree");
+    // Bounded so that every sum of them stays finite: no atom is below about −3e4 hartree.
+    const auto bounded = [&](const YAML::Node& node, const std::string& key) {
+      const double e = y.energy_J_per_mol(node, what + " '" + key + "'", "hartree");
+      if (!(std::abs(e) <= limits::max_atomic_energy_J_per_mol))
+        y.error(node,
+                fmt::format("{} '{}' lies beyond +-{:g} hartree, expected a free atom's energy (H about "
+                            "-0.5, the heaviest atoms about -3e4 hartree)",
+                            what, key, limits::max_atomic_energy_hartree));
+      return e;
+    };
+    atom.energy_J_per_mol = bounded(*energy, "energy");
     if (const YAML::Node* so = YamlValues::find(a, "spin_orbit"))
-      atom.spin_orbit_J_per_mol = y.energy_J_per_mol(*so, what + " 'spin_orbit'", "hartree");
+      atom.spin_orbit_J_per_mol = bounded(*so, "spin_orbit");
     method.elements[symbol] = atom;
   }
   if (const YAML::Node* bonds = YamlValues::find(e, "bond_corrections")) {

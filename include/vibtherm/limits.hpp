@@ -29,6 +29,10 @@ inline constexpr double max_moment_amu_A2 = 1e12;
 inline constexpr double max_enthalpy_of_formation_J_per_mol = 1e8;  // |ΔfH°| ≤ 100,000 kJ/mol
 inline constexpr double max_rotor_energy_J_per_mol = 1e6;           // barrier and scan, 1000 kJ/mol
 inline constexpr double max_conformer_energy_J_per_mol = 1e6;       // |relative energy|, 1000 kJ/mol
+// |free-atom energy| in a method file: the heaviest atoms lie near −3e4 hartree.
+inline constexpr double max_atomic_energy_hartree = 1e5;
+inline constexpr double max_atomic_energy_J_per_mol =
+    max_atomic_energy_hartree * 2625499.6394799;  // CODATA 2018 Eh N_A
 inline constexpr int max_symmetry_number = 1000;
 // A hindered rotor's internal symmetry number, the period of its torsional potential: real
 // torsions have 1 to 6 (a methyl top 3, a C6 ring about its axis 6); 12 leaves room for a
