@@ -128,7 +128,17 @@ std::vector<std::vector<int>> partners(const Centred& c, double tolerance) {
 
 std::vector<Operation> find_operations(const Centred& c, double tolerance) {
   const auto candidates = partners(c, tolerance);
-  const double away = 5 * tolerance;  // reference atoms well off the centre
+  std::vector<int> unmoved(c.r.size());
+  std::iota(unmoved.begin(), unmoved.end(), 0);
+  const Operation identity{Eigen::Matrix3d::Identity(), 1, unmoved, 1};
+  // Reference atoms well off the centre and off the axis through the first; a nearly
+  // linear frame (every atom within 5 tolerances of that axis, yet not collinear) takes
+  // the farthest atoms instead, so the pair is always defined.
+  double away = 5 * tolerance;
+  double farthest = 0.0;
+  for (const Eigen::Vector3d& x : c.r) farthest = std::max(farthest, x.norm());
+  if (!(farthest > 0.0)) return {identity};
+  away = std::min(away, 0.5 * farthest);
   int a = -1;
   for (std::size_t i = 0; i < c.r.size(); ++i) {
     if (c.r[i].norm() <= away) continue;
@@ -138,13 +148,17 @@ std::vector<Operation> find_operations(const Centred& c, double tolerance) {
       a = static_cast<int>(i);
   }
   const Eigen::Vector3d u = c.r[static_cast<std::size_t>(a)];
+  const auto spread = [&](const Eigen::Vector3d& x) { return u.normalized().cross(x).norm(); };
+  double widest = 0.0;  // distance of the farthest atom from the axis through a
+  for (const Eigen::Vector3d& x : c.r) widest = std::max(widest, spread(x));
+  if (!(widest > 0.0)) return {identity};
+  const double off_axis = std::min(away, 0.5 * widest);
   int b = -1;
   double b_score = 0.0;
   for (std::size_t j = 0; j < c.r.size(); ++j) {
-    const double spread = u.normalized().cross(c.r[j]).norm();  // distance from the axis through a
-    if (spread <= away) continue;
+    if (spread(c.r[j]) <= off_axis) continue;
     // Fewer partners first; among those, the wider spread conditions the frame better.
-    const double score = spread / static_cast<double>(candidates[j].size());
+    const double score = spread(c.r[j]) / static_cast<double>(candidates[j].size());
     if (b < 0 || score > b_score) b = static_cast<int>(j), b_score = score;
   }
   const Eigen::Vector3d v = c.r[static_cast<std::size_t>(b)];
@@ -156,7 +170,7 @@ std::vector<Operation> find_operations(const Centred& c, double tolerance) {
       const Eigen::Vector3d u2 = c.r[static_cast<std::size_t>(a2)];
       const Eigen::Vector3d v2 = c.r[static_cast<std::size_t>(b2)];
       if (a2 == b2 || std::abs((u2 - v2).norm() - ab) > 4 * tolerance) continue;
-      if (u2.normalized().cross(v2).norm() <= away) continue;
+      if (u2.normalized().cross(v2).norm() <= off_axis) continue;
       for (int det : {1, -1}) {
         const Eigen::Matrix3d guess = frame(u2, v2, det) * frame(u, v, 1).transpose();
         const std::vector<int> perm = assign(c, guess, assignment_radius_angstrom);

@@ -245,3 +245,23 @@ TEST_CASE("display labels") {
   CHECK(point_group_display("Dinfh") == "D∞h");
   CHECK(point_group_display("C2v") == "C2v");
 }
+
+TEST_CASE("a nearly linear molecule, bent by less than five tolerances, is still classified") {
+  // Generated C–C–H chains bent by 0.08 and 0.12 Å off the C–C line (beyond the 0.01 Å
+  // collinearity test, within the 0.05 Å the reference atoms keep off the axis) crashed
+  // the detector. Three atoms not on a line span a mirror plane and nothing more: Cs,
+  // σ = 1 (common practice).
+  for (const std::vector<Atom>& atoms :
+       {std::vector<Atom>{at("C", 0, 0, 0), at("C", 1.5, 0, 0), at("H", 2.71439, -0.07412, -0.04089)},
+        std::vector<Atom>{at("C", 0, 0, 0), at("C", 1.5, 0, 0), at("H", 2.72924, -0.02430, 0.11350)},
+        std::vector<Atom>{at("H", 0, 0, 0), at("C", 1.06, 0, 0), at("N", 2.22, 0.04, 0)}}) {
+    const PointGroup g = detect_point_group(atoms);
+    CHECK(g.label == "Cs");
+    CHECK(g.symmetry_number == 1);
+  }
+  // A symmetric nearly linear triatomic keeps its two-fold axis: C2v, σ = 2.
+  const PointGroup bent =
+      detect_point_group({at("O", -1.16, 0, 0), at("C", 0, 0.03, 0), at("O", 1.16, 0, 0)});
+  CHECK(bent.label == "C2v");
+  CHECK(bent.symmetry_number == 2);
+}
