@@ -24,6 +24,7 @@ struct FitPlan::System {
   std::vector<std::pair<int, int>> rows;  // (sample, range), one row per range holding the sample
   Eigen::MatrixXd basis;                  // unweighted Cp basis, rows × n
   Eigen::MatrixXd Q1, R1, N;              // Cᵀ P = Q [R1; 0], Q = [Q1 N]
+  Eigen::MatrixXd basis_N, basis_Q1;      // basis · N and basis · Q1: a species only weights rows
   Eigen::PermutationMatrix<Eigen::Dynamic, Eigen::Dynamic> P;
 };
 
@@ -106,6 +107,8 @@ std::unique_ptr<const FitPlan::System> build_system(const std::vector<double>& g
   s->P = cqr.colsPermutation();
   s->Q1 = Q.leftCols(p);
   s->N = Q.rightCols(n - p);
+  s->basis_N = s->basis * s->N;
+  s->basis_Q1 = s->basis * s->Q1;
   return s;
 }
 
@@ -173,22 +176,23 @@ std::vector<Nasa9Range> FitPlan::solve(std::size_t candidate, const FitInput& in
   const std::vector<int> ex = exponents_of(options_.form);
   const int m = s.m, per = s.per;
   constexpr double kWeightFloor_Cp_over_R = 0.5;  // see fit_nasa.cpp
-  Eigen::MatrixXd A(s.basis.rows(), s.n);
-  Eigen::VectorXd y(s.basis.rows());
-  for (std::size_t j = 0; j < s.rows.size(); ++j) {
-    const FitSample& sample = in.samples[s.rows[j].first];
-    const double w = 1.0 / std::max(sample.Cp_over_R, kWeightFloor_Cp_over_R);
-    A.row(static_cast<Eigen::Index>(j)) = w * s.basis.row(static_cast<Eigen::Index>(j));
-    y(static_cast<Eigen::Index>(j)) = w * sample.Cp_over_R;
-  }
   Eigen::VectorXd d = Eigen::VectorXd::Zero(s.p);
   d(s.p - 2) = in.H298_over_R / kScale_K;
   d(s.p - 1) = in.S298_over_R;
   const Eigen::VectorXd Ptd = s.P.transpose() * d;
   const Eigen::VectorXd u = s.R1.transpose().triangularView<Eigen::Lower>().solve(Ptd);
   const Eigen::VectorXd x0 = s.Q1 * u;
-  Eigen::ColPivHouseholderQR<Eigen::MatrixXd> lsq(A * s.N);
-  const Eigen::VectorXd z = lsq.solve(y - A * x0);
+  // Weighted rows: A = W basis, so A N = W (basis N) and A x0 = W (basis Q1) u.
+  const Eigen::VectorXd fixed = s.basis_Q1 * u;
+  Eigen::VectorXd w(s.basis.rows()), rhs(s.basis.rows());
+  for (std::size_t j = 0; j < s.rows.size(); ++j) {
+    const auto i = static_cast<Eigen::Index>(j);
+    const double Cp = in.samples[s.rows[j].first].Cp_over_R;
+    w(i) = 1.0 / std::max(Cp, kWeightFloor_Cp_over_R);
+    rhs(i) = w(i) * (Cp - fixed(i));
+  }
+  Eigen::ColPivHouseholderQR<Eigen::MatrixXd> lsq(w.asDiagonal() * s.basis_N);
+  const Eigen::VectorXd z = lsq.solve(rhs);
   const Eigen::VectorXd x = x0 + s.N * z;
 
   // Back to kelvin: a_k = α_k / 1000^e_k; the ln T terms shift the constants

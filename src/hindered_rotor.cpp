@@ -9,6 +9,7 @@
 #include <numeric>
 #include <string_view>
 
+#include "vector_exp.hpp"
 #include "vibtherm/constants.hpp"
 #include "vibtherm/limits.hpp"
 
@@ -127,6 +128,10 @@ double coupled_reduced_moment_amu_A2(const std::vector<Atom>& atoms, int atom_a,
   return I_red > 1e-12 * A ? I_red : 0.0;
 }
 
+// LAPACK (Debian's liblapack): eigenvalues of a symmetric tridiagonal matrix by the
+// Pal–Walker–Kahan root-free QR, ascending in d; info ≠ 0 when it did not converge.
+extern "C" void dsterf_(const int* n, double* d, double* e, int* info);
+
 namespace {
 
 int potential_period(const TorsionPotential& v) {
@@ -156,6 +161,18 @@ bool needs_dense_solver(const TorsionPotential& v) {
   return cosine_terms > 1;
 }
 
+// max V − min V: 2 |c_k| for one cosine term (a barrier), else sampled every 0.05°.
+double potential_range_J_per_mol(const TorsionPotential& v) {
+  if (!needs_dense_solver(v)) {
+    double range = 0.0;
+    for (std::size_t k = 1; k < v.cos_J_per_mol.size(); ++k) range += 2.0 * std::abs(v.cos_J_per_mol[k]);
+    return range;
+  }
+  double v_max = v.value_J_per_mol(0.0);
+  for (int i = 1; i < 7200; ++i) v_max = std::max(v_max, v.value_J_per_mol(2.0 * c::pi * i / 7200.0));
+  return v_max - v.minimum_J_per_mol();
+}
+
 // Weight of the highest level relative to the level sum at T (levels from the ground, 0).
 double top_level_weight(const std::vector<double>& energies_J_per_mol, double T_K) {
   const double RT = c::gas_constant_J_per_mol_K * T_K;
@@ -169,9 +186,7 @@ double top_level_weight(const std::vector<double>& energies_J_per_mol, double T_
 TorsionLevels torsion_levels(double reduced_moment_amu_A2, const TorsionPotential& potential,
                              double max_temperature_K, const SourceLocation& where, std::string_view rotor) {
   const double B = rotational_constant_J_per_mol(reduced_moment_amu_A2);
-  double v_max = potential.value_J_per_mol(0.0);
-  for (int i = 1; i < 7200; ++i) v_max = std::max(v_max, potential.value_J_per_mol(2.0 * c::pi * i / 7200.0));
-  const double range = v_max - potential.minimum_J_per_mol();
+  const double range = potential_range_J_per_mol(potential);
   const double RT = c::gas_constant_J_per_mol_K * max_temperature_K;
   // First guess: free-rotor levels B m² reach the potential's range plus 40 RT_max; the
   // check after diagonalising decides. Clamped as a double: no overflow converting to int.
@@ -238,29 +253,26 @@ TorsionLevels torsion_levels_in_basis(double reduced_moment_amu_A2, const Torsio
       out.push_back(h(0, 0));
       return;
     }
-    Eigen::SelfAdjointEigenSolver<Eigen::MatrixXd> solver;
-    double scale = 1.0;
     if (cosine_terms <= 1) {
-      Eigen::VectorXd d(n), e(n - 1);
-      for (Eigen::Index i = 0; i < n; ++i) d(i) = h(i, i);
-      for (Eigen::Index i = 0; i + 1 < n; ++i) e(i) = h(i + 1, i);
-      // Scaled to entries of at most 1 first, as Eigen's compute() does: unscaled, the QR
-      // of Eigen 3.4 fails to converge for about 1 in 60 rotors (its deflation test) and
-      // leaves wrong eigenvalues (reported only through info()).
-      scale = std::max(d.cwiseAbs().maxCoeff(), e.size() ? e.cwiseAbs().maxCoeff() : 0.0);
-      if (!(scale > 0.0)) scale = 1.0;
-      d /= scale;
-      e /= scale;
-      solver.computeFromTridiagonal(d, e, Eigen::EigenvaluesOnly);
-    } else {
-      Eigen::MatrixXd H = Eigen::MatrixXd::Zero(n, n);
-      for (Eigen::Index i = 0; i < n; ++i)
-        for (Eigen::Index j = std::max<Eigen::Index>(0, i - band); j < std::min(n, i + band + 1); ++j)
-          H(i, j) = h(i, j);
-      solver.compute(H, Eigen::EigenvaluesOnly);
+      // LAPACK's dsterf scales the matrix itself (Eigen 3.4's tridiagonal QR, unscaled,
+      // did not converge for about 1 in 60 rotors and said so only through info()).
+      std::vector<double> d(static_cast<std::size_t>(n)), e(static_cast<std::size_t>(n - 1));
+      for (Eigen::Index i = 0; i < n; ++i) d[static_cast<std::size_t>(i)] = h(i, i);
+      for (Eigen::Index i = 0; i + 1 < n; ++i) e[static_cast<std::size_t>(i)] = h(i + 1, i);
+      const int size = static_cast<int>(n);
+      int info = 0;
+      dsterf_(&size, d.data(), e.data(), &info);
+      if (info != 0) throw_unconverged(n);
+      out.insert(out.end(), d.begin(), d.end());
+      return;
     }
+    Eigen::MatrixXd H = Eigen::MatrixXd::Zero(n, n);
+    for (Eigen::Index i = 0; i < n; ++i)
+      for (Eigen::Index j = std::max<Eigen::Index>(0, i - band); j < std::min(n, i + band + 1); ++j)
+        H(i, j) = h(i, j);
+    Eigen::SelfAdjointEigenSolver<Eigen::MatrixXd> solver(H, Eigen::EigenvaluesOnly);
     if (solver.info() != Eigen::Success) throw_unconverged(n);
-    for (Eigen::Index i = 0; i < n; ++i) out.push_back(scale * solver.eigenvalues()(i));
+    for (Eigen::Index i = 0; i < n; ++i) out.push_back(solver.eigenvalues()(i));
   };
   std::vector<std::vector<double>> blocks(static_cast<std::size_t>(g));
   for (int r = 0; r < g; ++r) {
@@ -350,15 +362,26 @@ MotionTerms hindered_rotor_terms(const TorsionLevels& levels, int symmetry, doub
   const double RT = c::gas_constant_J_per_mol_K * T_K;
   // Levels are counted from the ground level (0), so every weight is ≤ 1: no overflow.
   double q = 0.0, e1 = 0.0, e2 = 0.0;
-  for (double e : levels.energies_J_per_mol) {
-    const double x = e / RT;
-    // Levels ascend: past x = 60 every weight is below e^-60 = 9e-27 of the ground
-    // level's (and x² e^-x < 4e-23), far below double precision of the sums.
-    if (x > 60.0) break;
-    const double w = std::exp(-x);
-    q += w;
-    e1 += w * x;
-    e2 += w * x * x;
+  // Levels ascend: past x = 60 every weight is below e^-60 = 9e-27 of the ground level's
+  // (and x² e^-x < 4e-23), far below double precision of the sums. Their weights go in
+  // chunks through one vector exponential (vector_exp.hpp).
+  const std::vector<double>& E = levels.energies_J_per_mol;
+  const double inv_RT = 1.0 / RT;
+  constexpr std::size_t chunk = 64;
+  double x[chunk], w[chunk];
+  for (std::size_t start = 0; start < E.size(); start += chunk) {
+    std::size_t n = 0;
+    while (n < chunk && start + n < E.size() && E[start + n] * inv_RT <= 60.0) {
+      x[n] = E[start + n] * inv_RT;
+      ++n;
+    }
+    detail::exp_of_negated(x, w, n);
+    for (std::size_t i = 0; i < n; ++i) {
+      q += w[i];
+      e1 += w[i] * x[i];
+      e2 += w[i] * x[i] * x[i];
+    }
+    if (n < chunk) break;
   }
   MotionTerms t;
   const double mean = e1 / q;

@@ -4,6 +4,7 @@
 #include <cmath>
 #include <numbers>
 
+#include "vector_exp.hpp"
 #include "vibtherm/constants.hpp"
 
 namespace vibtherm {
@@ -101,29 +102,54 @@ MotionTerms harmonic_oscillators_terms(std::span<const double> theta_K, double T
   int exponent = 0;
   double deficit = 0.0;  // 1 − Π, accurate while no rescaling happened
   double U = 0.0, Cv = 0.0;
-  for (double theta : theta_K) {
-    const double x = theta * inv_T;
-    if (x > 700.0) continue;  // frozen: e^{−x} underflows (as harmonic_oscillator_terms)
-    // Below x = 0.5, 1 − e^{−x} from expm1 keeps its digits and e^{−x} = 1 + expm1 ≥ 0.6
-    // loses none; above, e^{−x} ≤ 0.61 and 1 − e^{−x} ≥ 0.39 lose none either.
-    double e, one_minus_e;
-    if (x < 0.5) {
-      const double m = std::expm1(-x);
-      e = 1.0 + m;
-      one_minus_e = -m;
-    } else {
-      e = std::exp(-x);
-      one_minus_e = 1.0 - e;
+  // Chunks of modes: their exponentials in one vector call (vector_exp.hpp).
+  constexpr std::size_t chunk = 64;
+  double x[chunk], e[chunk], small_x[chunk];
+  std::size_t small_index[chunk];
+  for (std::size_t start = 0; start < theta_K.size(); start += chunk) {
+    const std::size_t n = std::min(chunk, theta_K.size() - start);
+    std::size_t small = 0;  // the modes with x < 0.5 also get expm1
+    for (std::size_t i = 0; i < n; ++i) {
+      x[i] = theta_K[start + i] * inv_T;
+      if (x[i] < 0.5) small_index[small] = i, small_x[small++] = x[i];
     }
-    const double ratio = e / one_minus_e;
-    U += x * ratio;
-    Cv += x * x * ratio / one_minus_e;
-    if (exponent == 0) deficit += e * product;  // 1 − Π(1−e) grows by e·Π
-    product *= one_minus_e;
-    if (product < 0x1p-500) {  // rescale long before the smallest normal double
-      int shift = 0;
-      product = std::frexp(product, &shift);
-      exponent += shift;
+    detail::exp_of_negated(x, e, n);
+    detail::expm1_of_negated(small_x, small_x, small);
+    // e^{−x} and 1 − e^{−x}: below x = 0.5 from expm1, which keeps the digits of 1 − e^{−x},
+    // and e^{−x} = 1 + expm1 ≥ 0.6 loses none; above, e^{−x} ≤ 0.61 and 1 − e^{−x} ≥ 0.39
+    // lose none either. Past x = 700 the mode is frozen (e^{−x} underflows, as in
+    // harmonic_oscillator_terms): weight 0 and factor 1 add nothing.
+    double one_minus_e[chunk];
+    for (std::size_t i = 0; i < n; ++i) {
+      one_minus_e[i] = x[i] > 700.0 ? 1.0 : 1.0 - e[i];
+      e[i] = x[i] > 700.0 ? 0.0 : e[i];
+    }
+    for (std::size_t k = 0; k < small; ++k) {
+      const std::size_t j = small_index[k];
+      one_minus_e[j] = -small_x[k];
+      e[j] = 1.0 + small_x[k];
+    }
+    // U/RT = Σ x e/(1 − e), Cv/R = Σ x² e/(1 − e)², two accumulators each.
+    const auto add = [&](std::size_t i, double& u, double& cv) {
+      const double inv = 1.0 / one_minus_e[i];
+      const double xr = x[i] * e[i] * inv;
+      u += xr;
+      cv += xr * x[i] * inv;
+    };
+    double U0 = 0.0, U1 = 0.0, Cv0 = 0.0, Cv1 = 0.0;
+    std::size_t i = 0;
+    for (; i + 2 <= n; i += 2) add(i, U0, Cv0), add(i + 1, U1, Cv1);
+    if (i < n) add(i, U0, Cv0);
+    U += U0 + U1;
+    Cv += Cv0 + Cv1;
+    for (std::size_t i = 0; i < n; ++i) {
+      if (exponent == 0) deficit += e[i] * product;  // 1 − Π(1−e) grows by e·Π
+      product *= one_minus_e[i];
+      if (product < 0x1p-500) {  // rescale long before the smallest normal double
+        int shift = 0;
+        product = std::frexp(product, &shift);
+        exponent += shift;
+      }
     }
   }
   const double ln_product = exponent == 0 && deficit < 0.5 ? std::log1p(-deficit)

@@ -23,6 +23,15 @@ double TorsionPotential::value_J_per_mol(double phi_rad) const {
 }
 
 double TorsionPotential::minimum_J_per_mol() const {
+  // One cosine term (a barrier): c0 − |c_k| exactly.
+  int terms = 0;
+  std::size_t term = 0;
+  for (std::size_t k = 1; k < cos_J_per_mol.size(); ++k) {
+    if (sin_J_per_mol[k] != 0.0) terms = 2;
+    if (cos_J_per_mol[k] != 0.0) ++terms, term = k;
+  }
+  if (terms == 0) return cos_J_per_mol.empty() ? 0.0 : cos_J_per_mol[0];
+  if (terms == 1) return cos_J_per_mol[0] - std::abs(cos_J_per_mol[term]);
   double lowest = value_J_per_mol(0.0);
   for (int i = 1; i < 7200; ++i) lowest = std::min(lowest, value_J_per_mol(2.0 * c::pi * i / 7200.0));
   return lowest;

@@ -17,7 +17,7 @@ struct TorsionPotential {
   std::vector<double> cos_J_per_mol{0.0};
   std::vector<double> sin_J_per_mol{0.0};
   double value_J_per_mol(double phi_rad) const;
-  double minimum_J_per_mol() const;  // on a 1/20 degree grid
+  double minimum_J_per_mol() const;  // exact for one cosine term, else on a 1/20 degree grid
 };
 
 // V(φ) = V/2 (1 − cos(σφ)) (design.md section 4).
