@@ -431,4 +431,46 @@ HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRo
   return m;
 }
 
+TorsionReplacement replace_torsional_modes(const Species& s, const std::vector<double>& vibrations_cm1,
+                                           double frequency_scale, double max_temperature_K) {
+  TorsionReplacement out;
+  std::vector<char> taken(vibrations_cm1.size(), 0);
+  for (const HinderedRotor& r : s.hindered_rotors) {
+    const double target = r.replaces_cm1 * frequency_scale;
+    std::size_t best = vibrations_cm1.size();
+    for (std::size_t i = 0; i < vibrations_cm1.size(); ++i)
+      if (!taken[i] && (best == vibrations_cm1.size() ||
+                        std::abs(vibrations_cm1[i] - target) < std::abs(vibrations_cm1[best] - target)))
+        best = i;
+    const double tolerance = replaces_tolerance_cm1 * frequency_scale;
+    if (best == vibrations_cm1.size() || std::abs(vibrations_cm1[best] - target) > tolerance)
+      fail(r.where,
+           fmt::format("hindered rotor 'replaces' {:g} cm^-1 matches no remaining vibration within {:g} "
+                       "cm^-1, expected one of the frequencies",
+                       r.replaces_cm1, replaces_tolerance_cm1));
+    taken[best] = 1;
+    out.rotors.push_back(build_hindered_rotor(s, r, max_temperature_K));
+    const HinderedRotorModel& model = out.rotors.back();
+    out.notes.push_back(fmt::format(
+        "hindered rotor about atoms {}-{} (symmetry {}, reduced moment {:.4f} amu A^2 {}) replaces the mode "
+        "at {:.1f} cm^-1",
+        r.bond_atoms[0] + 1, r.bond_atoms[1] + 1, r.symmetry, model.reduced_moment_amu_A2,
+        r.moment == RotorMoment::coupled
+            ? fmt::format("coupled to the overall rotation; {:.4f} about the bond axis alone",
+                          model.bond_axis_moment_amu_A2)
+            : std::string("about the bond axis, I_A I_B/(I_A + I_B)"),
+        vibrations_cm1[best]));
+    if (model.scan_fit) {
+      const std::string rotor =
+          fmt::format("hindered rotor about atoms {}-{}", r.bond_atoms[0] + 1, r.bond_atoms[1] + 1);
+      out.notes.push_back(scan_fit_note(*model.scan_fit, r.scan.size(), rotor));
+      for (std::string& w : scan_fit_warnings(*model.scan_fit, r.symmetry, rotor))
+        out.warnings.push_back(std::move(w));
+    }
+  }
+  for (std::size_t i = 0; i < vibrations_cm1.size(); ++i)
+    if (!taken[i]) out.kept_cm1.push_back(vibrations_cm1[i]);
+  return out;
+}
+
 }  // namespace vibtherm

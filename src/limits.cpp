@@ -4,6 +4,8 @@
 
 #include <cmath>
 
+#include "vibtherm/constants.hpp"
+
 namespace vibtherm::limits {
 
 void check_range(double value, double low, double high, std::string_view what, std::string_view unit,
@@ -53,6 +55,10 @@ void check_species(const Species& s) {
       fail(at, fmt::format("{}electronic level degeneracy is {}, expected 1 to {}", who, level.degeneracy,
                            max_degeneracy));
   }
+  if (s.electronic_energy_J_per_mol)
+    check_range(*s.electronic_energy_J_per_mol / (constants::hartree_J * constants::avogadro_per_mol),
+                -max_molecular_energy_hartree, max_molecular_energy_hartree, who + "electronic energy",
+                "hartree", key_location(s, "electronic_energy"));
   if (s.enthalpy_of_formation_J_per_mol)
     check_range(*s.enthalpy_of_formation_J_per_mol / 1e3, -max_enthalpy_of_formation_J_per_mol / 1e3,
                 max_enthalpy_of_formation_J_per_mol / 1e3, who + "enthalpy of formation", "kJ/mol", at);

@@ -11,6 +11,7 @@
 #include "json_location.hpp"
 #include "vibtherm/constants.hpp"
 #include "vibtherm/elements.hpp"
+#include "vibtherm/limits.hpp"
 #include "vibtherm/read_species.hpp"
 #include "vibtherm/species_builder.hpp"
 #include "vibtherm/units.hpp"
@@ -313,14 +314,17 @@ Species QcReader::read(bool geometry_only) {
     error({}, "result has no 'driver', expected driver 'hessian' with the Hessian in 'return_result'");
   const std::string& what = text(*driver, {"driver"});
   const json* energy = properties ? member(*properties, "return_energy") : nullptr;
-  if (energy && !energy->is_null()) {
-    species.electronic_energy_J_per_mol =
-        *to_energy_J_per_mol(number(*energy, {"properties", "return_energy"}), "hartree");
-    species.key_locations["electronic_energy"] = at({"properties", "return_energy"});
-  } else if (const json* r = member(root, "return_result"); what == "energy" && r) {
-    species.electronic_energy_J_per_mol = *to_energy_J_per_mol(number(*r, {"return_result"}), "hartree");
-    species.key_locations["electronic_energy"] = at({"return_result"});
-  }
+  const auto take_energy = [&](const json& value, const JsonPath& path, const char* key) {
+    const double hartree = number(value, path);
+    limits::check_range(hartree, -limits::max_molecular_energy_hartree, limits::max_molecular_energy_hartree,
+                        key, "hartree", at(path));
+    species.electronic_energy_J_per_mol = *to_energy_J_per_mol(hartree, "hartree");
+    species.key_locations["electronic_energy"] = at(path);
+  };
+  if (energy && !energy->is_null())
+    take_energy(*energy, {"properties", "return_energy"}, "'return_energy'");
+  else if (const json* r = member(root, "return_result"); what == "energy" && r)
+    take_energy(*r, {"return_result"}, "'return_result'");
   JsonPath hessian_path;
   const json* h = nullptr;
   if (what == "hessian") {

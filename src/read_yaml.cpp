@@ -14,6 +14,7 @@
 #include "vibtherm/constants.hpp"
 #include "vibtherm/elements.hpp"
 #include "vibtherm/hindered_rotor.hpp"
+#include "vibtherm/limits.hpp"
 #include "vibtherm/read_species.hpp"
 #include "vibtherm/species_builder.hpp"
 #include "vibtherm/spelling.hpp"
@@ -88,8 +89,13 @@ class YamlReader : public SpeciesYamlValues {
 
 // electronic_energy (hartree when bare), method (a file beside this one), bonds (1-based pairs).
 void YamlReader::read_energy_keys(const Entries& e, Species& species) const {
-  if (const YAML::Node* n = find(e, "electronic_energy"))
+  if (const YAML::Node* n = find(e, "electronic_energy")) {
     species.electronic_energy_J_per_mol = energy_J_per_mol(*n, "'electronic_energy'", "hartree");
+    limits::check_range(
+        *species.electronic_energy_J_per_mol / (constants::hartree_J * constants::avogadro_per_mol),
+        -limits::max_molecular_energy_hartree, limits::max_molecular_energy_hartree, "'electronic_energy'",
+        "hartree", at(*n));
+  }
   if (const YAML::Node* m = find(e, "method")) {
     const std::filesystem::path given = YamlValues::text(*m, "'method'");
     species.method_file =

@@ -138,9 +138,7 @@ void frequencies_from_hessian(PreparedSpecies& p) {
                   p.species.frequencies_cm1.size(), external_motion_count(external)));
 }
 
-// Takes each hindered rotor's torsional mode out of the vibrations and builds the rotor.
-// The match is against the unscaled input wavenumbers (the file's `replaces` is copied
-// from them) within replaces_tolerance_cm1; two rotors cannot replace one mode.
+// Takes each hindered rotor's torsional mode out of the vibrations (hindered_rotor.hpp).
 void replace_torsions(PreparedSpecies& p) {
   const Species& s = p.species;
   if (s.hindered_rotors.empty()) return;
@@ -148,45 +146,13 @@ void replace_torsions(PreparedSpecies& p) {
     fail(s.origin,
          fmt::format("species '{}' has hindered rotors, expected a gas-phase species given by 'atoms'",
                      s.name));
-  std::vector<char> taken(p.vibrations_cm1.size(), 0);
-  for (const HinderedRotor& r : s.hindered_rotors) {
-    const double target = r.replaces_cm1 * p.options.frequency_scale;
-    std::size_t best = p.vibrations_cm1.size();
-    for (std::size_t i = 0; i < p.vibrations_cm1.size(); ++i)
-      if (!taken[i] && (best == p.vibrations_cm1.size() ||
-                        std::abs(p.vibrations_cm1[i] - target) < std::abs(p.vibrations_cm1[best] - target)))
-        best = i;
-    const double tolerance = replaces_tolerance_cm1 * p.options.frequency_scale;
-    if (best == p.vibrations_cm1.size() || std::abs(p.vibrations_cm1[best] - target) > tolerance)
-      fail(r.where,
-           fmt::format("hindered rotor 'replaces' {:g} cm^-1 matches no remaining vibration within {:g} "
-                       "cm^-1, expected one of the frequencies",
-                       r.replaces_cm1, replaces_tolerance_cm1));
-    taken[best] = 1;
-    p.hindered_rotors.push_back(build_hindered_rotor(
-        s, r, std::max(p.options.max_temperature_K, constants::reference_temperature_K)));
-    const HinderedRotorModel& model = p.hindered_rotors.back();
-    p.notes.push_back(fmt::format(
-        "hindered rotor about atoms {}-{} (symmetry {}, reduced moment {:.4f} amu A^2 {}) replaces the mode "
-        "at {:.1f} cm^-1",
-        r.bond_atoms[0] + 1, r.bond_atoms[1] + 1, r.symmetry, model.reduced_moment_amu_A2,
-        r.moment == RotorMoment::coupled
-            ? fmt::format("coupled to the overall rotation; {:.4f} about the bond axis alone",
-                          model.bond_axis_moment_amu_A2)
-            : std::string("about the bond axis, I_A I_B/(I_A + I_B)"),
-        p.vibrations_cm1[best]));
-    if (model.scan_fit) {
-      const std::string rotor =
-          fmt::format("hindered rotor about atoms {}-{}", r.bond_atoms[0] + 1, r.bond_atoms[1] + 1);
-      p.notes.push_back(scan_fit_note(*model.scan_fit, r.scan.size(), rotor));
-      for (std::string& w : scan_fit_warnings(*model.scan_fit, r.symmetry, rotor))
-        p.warnings.push_back(std::move(w));
-    }
-  }
-  std::vector<double> kept;
-  for (std::size_t i = 0; i < p.vibrations_cm1.size(); ++i)
-    if (!taken[i]) kept.push_back(p.vibrations_cm1[i]);
-  p.vibrations_cm1 = std::move(kept);
+  TorsionReplacement r =
+      replace_torsional_modes(s, p.vibrations_cm1, p.options.frequency_scale,
+                              std::max(p.options.max_temperature_K, constants::reference_temperature_K));
+  p.hindered_rotors = std::move(r.rotors);
+  p.vibrations_cm1 = std::move(r.kept_cm1);
+  p.notes.insert(p.notes.end(), r.notes.begin(), r.notes.end());
+  p.warnings.insert(p.warnings.end(), r.warnings.begin(), r.warnings.end());
 }
 
 // The symmetry number used and the point group (point_group.hpp); a racemic mixture when
@@ -398,6 +364,15 @@ PreparedSpecies prepare_ensemble(const Species& species, const ModelOptions& opt
 void check_model_options(const ModelOptions& options) {
   limits::check_range(options.frequency_scale, limits::min_frequency_scale, limits::max_frequency_scale,
                       "frequency scale factor", "");
+  // The per-quantity options are checked here, before any species, so that the error
+  // names the option rather than the first species file.
+  const std::pair<const std::optional<double>&, const char*> per_quantity[] = {
+      {options.scale.zpe, "--scale-zpe (the zero-point energy's frequency scale factor)"},
+      {options.scale.enthalpy, "--scale-enthalpy (the thermal enthalpy's frequency scale factor)"},
+      {options.scale.entropy, "--scale-entropy (the entropy's frequency scale factor)"}};
+  for (const auto& [factor, what] : per_quantity)
+    if (factor)
+      limits::check_range(*factor, limits::min_frequency_scale, limits::max_frequency_scale, what, "");
   if (options.standard_state != StandardState::molar)
     limits::check_range(options.pressure_Pa, limits::min_pressure_Pa, limits::max_pressure_Pa, "pressure",
                         "Pa");

@@ -4,6 +4,7 @@
 
 #include <limits>
 #include <optional>
+#include <string>
 #include <string_view>
 #include <vector>
 
@@ -97,5 +98,17 @@ struct HinderedRotorModel {
 // `max_temperature_K`: the highest temperature the rotor's terms will be evaluated at.
 HinderedRotorModel build_hindered_rotor(const Species& species, const HinderedRotor& rotor,
                                         double max_temperature_K);
+
+// The species' rotors built and their torsional modes taken out of `vibrations_cm1` (the
+// scaled wavenumbers): each `replaces` is matched against the unscaled input wavenumbers
+// (the file's value is copied from them) within replaces_tolerance_cm1; two rotors cannot
+// replace one mode (InputError at the rotor).
+struct TorsionReplacement {
+  std::vector<HinderedRotorModel> rotors;
+  std::vector<double> kept_cm1;  // the vibrations left, in their order
+  std::vector<std::string> notes, warnings;
+};
+TorsionReplacement replace_torsional_modes(const Species& species, const std::vector<double>& vibrations_cm1,
+                                           double frequency_scale, double max_temperature_K);
 
 }  // namespace vibtherm

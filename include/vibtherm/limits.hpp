@@ -33,6 +33,8 @@ inline constexpr double max_conformer_energy_J_per_mol = 1e6;       // |relative
 inline constexpr double max_atomic_energy_hartree = 1e5;
 inline constexpr double max_atomic_energy_J_per_mol =
     max_atomic_energy_hartree * 2625499.6394799;  // CODATA 2018 Eh N_A
+// |molecular electronic energy|: a thousand of the heaviest atoms stay below 3e7 hartree.
+inline constexpr double max_molecular_energy_hartree = 1e8;
 inline constexpr int max_symmetry_number = 1000;
 // A hindered rotor's internal symmetry number, the period of its torsional potential: real
 // torsions have 1 to 6 (a methyl top 3, a C6 ring about its axis 6); 12 leaves room for a

@@ -35,9 +35,9 @@ ARGUMENT_CASES = [
     # Per-quantity scale factors and low-frequency wavenumbers are bounded too (1e308 gave an
     # infinite ZPE, 1e-320 a NaN Cp).
     (["../data/water.yaml", "--scale-zpe", "1e308"],
-     "../data/water.yaml: error: frequency scale factor for the zero-point energy is 1e+308, expected 0.1 to 10"),
+     "error: --scale-zpe (the zero-point energy's frequency scale factor) is 1e+308, expected 0.1 to 10"),
     (["../data/water.yaml", "--scale-entropy", "1e-320"],
-     "../data/water.yaml: error: frequency scale factor for the entropy is 9.99989e-321, expected 0.1 to 10"),
+     "error: --scale-entropy (the entropy's frequency scale factor) is 9.99989e-321, expected 0.1 to 10"),
     (["../data/water.yaml", "--low-freq", "qrrho", "--qrrho-omega0", "1e308"],
      "error: the qRRHO reference wavenumber (--qrrho-omega0) is 1e+308, expected 0.01 to 100000 cm^-1"),
     (["../data/water.yaml", "--low-freq", "floor", "--low-freq-floor", "1e-320"],
