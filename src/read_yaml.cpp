@@ -209,7 +209,9 @@ Species YamlReader::from_file(const Entries& e, const YAML::Node& node) const {
                     (std::filesystem::exists(path) ? " is not a regular file (a directory, device, FIFO or "
                                                      "socket), expected a QCSchema or Molden file"
                                                    : " does not exist (paths are relative to this file)"));
-  return read_exchange_file(path.string());
+  Species species = read_exchange_file(path.string());
+  species.source_files.push_back(path.string());
+  return species;
 }
 
 Species YamlReader::read(const std::string& text) {

@@ -105,6 +105,8 @@ struct Species {
   // Method file (input key `method`, resolved against the species file's folder; empty: none)
   // whose atomic energies make `electronic_energy` an enthalpy of formation (method.hpp).
   std::string method_file;
+  // Files read besides `origin` for this species (a `from` file), as opened.
+  std::vector<std::string> source_files;
   // Bonds for bond-additivity corrections (input key `bonds`, 0-based atom pairs); when
   // absent they are perceived from the geometry (bonds.hpp).
   std::optional<std::vector<std::array<int, 2>>> bonds;

@@ -364,6 +364,16 @@ void check_output_is_not_input(const std::string& output, const CommonOptions& o
   check_output_is_not_input(output, files, what);
 }
 
+std::vector<std::string> files_read_for(const PreparedSpecies& prepared) {
+  const Species& s = prepared.species;
+  std::vector<std::string> files{s.origin.file};
+  if (!s.method_file.empty()) files.push_back(s.method_file);
+  files.insert(files.end(), s.source_files.begin(), s.source_files.end());
+  for (const ConformerMember& m : prepared.conformers)
+    for (std::string& f : files_read_for(m.prepared)) files.push_back(std::move(f));
+  return files;
+}
+
 void write_output(const std::string& path, const std::string& content) {
   OutputSet outputs;
   outputs.write(outputs.add(path), content);

@@ -142,6 +142,10 @@ struct BatchSummary {
   std::vector<std::string> failures;  // formatted one-line errors (only with --keep-going)
 };
 
+// Every file a prepared species was read from: its own, its method file, a `from` file, and
+// those of its conformers.
+std::vector<std::string> files_read_for(const PreparedSpecies& prepared);
+
 // Outcome<Piece> for one species: read, prepare, then `work` (on a worker thread). An
 // InputError without a file gets the species' file.
 using RawProducer = std::function<void(const SpeciesInput&, std::vector<LogLine>&)>;
@@ -182,8 +186,12 @@ BatchSummary for_each_species(const CommonOptions& o, const std::vector<SpeciesS
         Outcome<Piece> out;
         out.error = run_species(
             paths[i], model,
-            [&](const SpeciesInput& in, std::vector<LogLine>& log) { out.piece = work(in, log); }, out.log,
-            o.method_file, &formations);
+            [&](const SpeciesInput& in, std::vector<LogLine>& log) {
+              // A file read through the species file (conformers, 'from', method) is an input too.
+              check_output_is_not_input(o.output, files_read_for(in.prepared), "-o");
+              out.piece = work(in, log);
+            },
+            out.log, o.method_file, &formations);
         return out;
       },
       [&](std::size_t, Outcome<Piece>& out) {

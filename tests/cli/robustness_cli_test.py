@@ -239,6 +239,23 @@ with tempfile.TemporaryDirectory() as tmp:
     for p in (inner, outer, method_copy, rxn):
         os.remove(p)
 
+    # Files read through a species file: a conformer's file and a 'from' file (both once
+    # replaced by -o, exit 0).
+    sub = os.path.join(tmp, "through")
+    os.makedirs(sub, exist_ok=True)
+    for name in ("water.yaml", "water-model-all-modes.molden", "model-conformers.yaml", "water-from-molden.yaml"):
+        open(os.path.join(sub, name), "w").write(open(os.path.join(data, name)).read())
+    kept_files = {p: open(p).read() for p in (os.path.join(sub, "water.yaml"),
+                                              os.path.join(sub, "water-model-all-modes.molden"))}
+    for args in (["table", os.path.join(sub, "model-conformers.yaml"), "-o", os.path.join(sub, "water.yaml")],
+                 ["fit", os.path.join(sub, "model-conformers.yaml"), "-o", os.path.join(sub, "water.yaml")],
+                 ["table", os.path.join(sub, "water-from-molden.yaml"), "-o",
+                  os.path.join(sub, "water-model-all-modes.molden")]):
+        r = run(*args, "-q")
+        check(f"{' '.join(os.path.basename(a) for a in args)}: a file read through the species file is refused",
+              r.returncode == 2 and "names the input file" in r.stderr and len(r.stderr.strip().splitlines()) == 1
+              and all(open(p).read() == t for p, t in kept_files.items()), r.stderr[:300])
+
     # --keep-going with every species failing leaves an existing output as it was.
     bad1 = os.path.join(tmp, "b1.yaml")
     open(bad1, "w").write("name: one\natoms:\n  - [Xx, 0, 0, 0]\n")
