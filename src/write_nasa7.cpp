@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <cctype>
 #include <cmath>
+#include <map>
 
 #include "vibtherm/error.hpp"
 
@@ -125,10 +126,13 @@ std::string write_nasa7(const std::vector<Nasa7>& species, const Nasa7WriteOptio
         lo = std::min(lo, s.T_low_K);
         hi = std::max(hi, s.T_high_K);
       }
+      // The most common T_mid, the first in file order among equals (counted once each:
+      // a mechanism has thousands of records).
+      std::map<double, int> count;
+      for (const auto& s : species) ++count[s.T_mid_K];
       int best = 0;
       for (const auto& s : species) {
-        const int n = static_cast<int>(std::count_if(species.begin(), species.end(),
-                                                     [&](const Nasa7& o) { return o.T_mid_K == s.T_mid_K; }));
+        const int n = count[s.T_mid_K];
         if (n > best) {
           best = n;
           mid = s.T_mid_K;
