@@ -201,14 +201,13 @@ FitResult fit_samples(const FitInput& input, const FitPlan& plan) {
     // Search the `auto` breakpoint on its candidates for the smallest maximum relative Cp error.
     double best = std::numeric_limits<double>::infinity();
     for (std::size_t c = 0; c < plan.candidate_count(); ++c) {
-      const double worst = worst_Cp_relative(errors_of(input, plan.solve(c, input)));
+      const double worst = plan.worst_Cp_relative(c, input);
       if (worst < best) {
         best = worst;
         chosen = c;
       }
     }
     result.searched_index = options.range.auto_index;
-    result.searched_max_Cp_relative = best;
   }
   result.breakpoints_K = plan.breakpoints_K(chosen);
   result.ranges = plan.solve(chosen, input);
@@ -220,6 +219,7 @@ FitResult fit_samples(const FitInput& input, const FitPlan& plan) {
                            limits::display_name(input.name), r.T_low_K, r.T_high_K));
   }
   result.errors = errors_of(input, result.ranges);
+  if (options.range.auto_index >= 0) result.searched_max_Cp_relative = worst_Cp_relative(result.errors);
   result.excursions = excursions_of(input, result.ranges);
 
   const FitThresholds& th = options.thresholds;

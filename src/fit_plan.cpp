@@ -169,6 +169,16 @@ FitPlan::FitPlan(FitPlan&&) noexcept = default;
 FitPlan& FitPlan::operator=(FitPlan&&) noexcept = default;
 
 std::vector<Nasa9Range> FitPlan::solve(std::size_t candidate, const FitInput& in) const {
+  return solve(candidate, in, nullptr);
+}
+
+double FitPlan::worst_Cp_relative(std::size_t candidate, const FitInput& in) const {
+  double worst = 0.0;
+  solve(candidate, in, &worst);
+  return worst;
+}
+
+std::vector<Nasa9Range> FitPlan::solve(std::size_t candidate, const FitInput& in, double* worst_Cp) const {
   const System& s = *systems_[candidate];
   if (in.samples.size() != grid_K_.size())
     fail({}, fmt::format("NASA fit: {} samples for a plan of {} grid temperatures", in.samples.size(),
@@ -194,6 +204,17 @@ std::vector<Nasa9Range> FitPlan::solve(std::size_t candidate, const FitInput& in
   Eigen::ColPivHouseholderQR<Eigen::MatrixXd> lsq(w.asDiagonal() * s.basis_N);
   const Eigen::VectorXd z = lsq.solve(rhs);
   const Eigen::VectorXd x = x0 + s.N * z;
+  if (worst_Cp) {
+    // The largest |Cp_fit − Cp|/Cp over the rows, from the scaled basis (no coefficients).
+    const Eigen::VectorXd fitted = s.basis * x;
+    *worst_Cp = 0.0;
+    for (std::size_t j = 0; j < s.rows.size(); ++j) {
+      const double Cp = in.samples[s.rows[j].first].Cp_over_R;
+      *worst_Cp = std::max(*worst_Cp, std::abs(fitted(static_cast<Eigen::Index>(j)) - Cp) /
+                                          std::max(std::abs(Cp), 1e-300));
+    }
+    return {};
+  }
 
   // Back to kelvin: a_k = α_k / 1000^e_k; the ln T terms shift the constants
   // (H/R: e = −1 term α s ln τ = a ln T − a ln s; S/R: e = 0 term likewise).

@@ -27,10 +27,14 @@ class FitPlan {
   const std::vector<double>& breakpoints_K(std::size_t candidate) const { return candidates_[candidate]; }
   // Least-squares solution for one breakpoint set; input.samples are on grid_K().
   std::vector<Nasa9Range> solve(std::size_t candidate, const FitInput& input) const;
+  // The largest relative Cp error over the grid of that solution (what `auto` minimises),
+  // without converting it to coefficients.
+  double worst_Cp_relative(std::size_t candidate, const FitInput& input) const;
 
   struct System;
 
  private:
+  std::vector<Nasa9Range> solve(std::size_t candidate, const FitInput& input, double* worst_Cp) const;
   FitOptions options_;
   std::vector<double> grid_K_;
   std::vector<std::vector<double>> candidates_;
