@@ -210,8 +210,8 @@ std::vector<Nasa9Range> FitPlan::solve(std::size_t candidate, const FitInput& in
     *worst_Cp = 0.0;
     for (std::size_t j = 0; j < s.rows.size(); ++j) {
       const double Cp = in.samples[s.rows[j].first].Cp_over_R;
-      *worst_Cp = std::max(*worst_Cp, std::abs(fitted(static_cast<Eigen::Index>(j)) - Cp) /
-                                          std::max(std::abs(Cp), 1e-300));
+      *worst_Cp = std::max(
+          *worst_Cp, std::abs(fitted(static_cast<Eigen::Index>(j)) - Cp) / std::max(std::abs(Cp), 1e-300));
     }
     return {};
   }
