@@ -199,14 +199,8 @@ FitResult fit_samples(const FitInput& input, const FitPlan& plan) {
   std::size_t chosen = 0;
   if (options.range.auto_index >= 0) {
     // Search the `auto` breakpoint on its candidates for the smallest maximum relative Cp error.
-    double best = std::numeric_limits<double>::infinity();
-    for (std::size_t c = 0; c < plan.candidate_count(); ++c) {
-      const double worst = plan.worst_Cp_relative(c, input);
-      if (worst < best) {
-        best = worst;
-        chosen = c;
-      }
-    }
+    double best = 0.0;
+    chosen = plan.best_candidate(input, best);
     result.searched_index = options.range.auto_index;
   }
   result.breakpoints_K = plan.breakpoints_K(chosen);

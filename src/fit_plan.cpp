@@ -8,6 +8,8 @@
 #include <Eigen/Dense>
 #include <algorithm>
 #include <cmath>
+#include <limits>
+#include <numeric>
 
 #include "fit_terms.hpp"
 #include "vibtherm/constants.hpp"
@@ -236,6 +238,164 @@ std::vector<Nasa9Range> FitPlan::solve(std::size_t candidate, const FitInput& in
     range.b2 = bS;
   }
   return out;
+}
+
+namespace {
+
+// The triangular factor R and Qᵀb of rows added one at a time (Givens rotations; Golub &
+// Van Loan §5.1.8): min ‖A a − b‖ over the rows so far is min ‖R a − Qᵀb‖.
+struct RowFactor {
+  Eigen::MatrixXd R;
+  Eigen::VectorXd q;
+  explicit RowFactor(Eigen::Index m) : R(Eigen::MatrixXd::Zero(m, m)), q(Eigen::VectorXd::Zero(m)) {}
+  void add(Eigen::VectorXd v, double y) {
+    const Eigen::Index m = R.rows();
+    for (Eigen::Index k = 0; k < m; ++k) {
+      if (v(k) == 0.0) continue;
+      const double r = std::hypot(R(k, k), v(k));
+      const double c = R(k, k) / r, s = v(k) / r;
+      for (Eigen::Index j = k; j < m; ++j) {
+        const double a = R(k, j), b = v(j);
+        R(k, j) = c * a + s * b;
+        v(j) = c * b - s * a;
+      }
+      const double a = q(k);
+      q(k) = c * a + s * y;
+      y = c * y - s * a;
+    }
+  }
+};
+
+}  // namespace
+
+std::size_t FitPlan::best_candidate(const FitInput& in, double& worst, std::size_t shortlist) const {
+  const std::size_t count = candidates_.size();
+  std::vector<std::size_t> order(count);
+  std::iota(order.begin(), order.end(), std::size_t{0});
+  const std::size_t n_grid = grid_K_.size();
+  const int nr = count ? systems_[0]->nr : 0;
+  // Each candidate's rows of range r are a run [first, last) of the grid (in_range).
+  std::vector<std::vector<std::pair<std::size_t, std::size_t>>> span(count);
+  for (std::size_t c = 0; c < count; ++c)
+    for (int r = 0; r < nr; ++r) {
+      std::size_t first = n_grid, last = 0;
+      for (std::size_t i = 0; i < n_grid; ++i)
+        if (in_range(candidates_[c], r, grid_K_[i])) first = std::min(first, i), last = i + 1;
+      span[c].push_back({first, last});
+    }
+  // A range's runs share their start (grown forward) or their end (grown backward).
+  std::vector<int> direction(static_cast<std::size_t>(nr), 0);  // +1 forward, −1 backward, 0 neither
+  for (int r = 0; r < nr; ++r) {
+    bool same_first = true, same_last = true;
+    for (std::size_t c = 0; c < count; ++c) {
+      same_first = same_first && span[c][r].first == span[0][r].first && span[c][r].first < span[c][r].second;
+      same_last = same_last && span[c][r].second == span[0][r].second && span[c][r].first < span[c][r].second;
+    }
+    direction[static_cast<std::size_t>(r)] = same_first ? 1 : same_last ? -1 : 0;
+  }
+  // NASA-7 only: the NASA-9 basis (τ^−2 … τ^4 up to 6000 K) is too ill-conditioned for the
+  // estimates to rank reliably, and its candidates are all solved exactly.
+  const bool estimable = options_.form == NasaForm::nasa7 && count > shortlist &&
+                         in.samples.size() == n_grid &&
+                         std::none_of(direction.begin(), direction.end(), [](int d) { return d == 0; });
+  if (estimable) {
+    // Every candidate from the factors of its ranges' weighted rows, gathered in one pass per
+    // range, then a constrained least squares of a few rows (stable: rotations only).
+    const std::vector<int> ex = exponents_of(options_.form);
+    const auto m = static_cast<Eigen::Index>(ex.size());
+    constexpr double kWeightFloor_Cp_over_R = 0.5;  // see fit_nasa.cpp
+    Eigen::MatrixXd terms(static_cast<Eigen::Index>(n_grid), m);
+    for (std::size_t i = 0; i < n_grid; ++i)
+      for (Eigen::Index k = 0; k < m; ++k)
+        terms(static_cast<Eigen::Index>(i), k) =
+            cp_term(ex[static_cast<std::size_t>(k)], grid_K_[i] / kScale_K);
+    const auto weight = [&](std::size_t i) {
+      return 1.0 / std::max(in.samples[i].Cp_over_R, kWeightFloor_Cp_over_R);
+    };
+    // factor[c][r]: the factor of candidate c's rows in range r.
+    std::vector<std::vector<RowFactor>> factor(count);
+    for (std::size_t c = 0; c < count; ++c) factor[c].assign(static_cast<std::size_t>(nr), RowFactor(m));
+    for (int r = 0; r < nr; ++r) {
+      std::vector<std::size_t> by_end(count);
+      std::iota(by_end.begin(), by_end.end(), std::size_t{0});
+      const bool forward = direction[static_cast<std::size_t>(r)] > 0;
+      // The varying end, nearest first.
+      const auto end_of = [&](std::size_t c) { return forward ? span[c][r].second : span[c][r].first; };
+      std::sort(by_end.begin(), by_end.end(), [&](std::size_t a, std::size_t b) {
+        return forward ? end_of(a) < end_of(b) : end_of(a) > end_of(b);
+      });
+      RowFactor running(m);
+      std::size_t next =
+          forward ? span[0][r].first : span[0][r].second;  // rows [first, next) or [next, last) done
+      for (std::size_t c : by_end) {
+        const std::size_t stop = end_of(c);
+        while (forward ? next < stop : next > stop) {
+          const std::size_t i = forward ? next++ : --next;
+          const double w = weight(i);
+          running.add(w * terms.row(static_cast<Eigen::Index>(i)).transpose(), w * in.samples[i].Cp_over_R);
+        }
+        factor[c][static_cast<std::size_t>(r)] = running;
+      }
+    }
+    std::vector<double> estimate(count, std::numeric_limits<double>::infinity());
+    for (std::size_t c = 0; c < count; ++c) {
+      const System& s = *systems_[c];
+      Eigen::MatrixXd S = Eigen::MatrixXd::Zero(nr * m, s.n);
+      Eigen::VectorXd q(nr * m);
+      for (int r = 0; r < nr; ++r) {
+        S.block(r * m, r * s.per, m, m) = factor[c][static_cast<std::size_t>(r)].R;
+        q.segment(r * m, m) = factor[c][static_cast<std::size_t>(r)].q;
+      }
+      Eigen::VectorXd d = Eigen::VectorXd::Zero(s.p);
+      d(s.p - 2) = in.H298_over_R / kScale_K;
+      d(s.p - 1) = in.S298_over_R;
+      const Eigen::VectorXd u = s.R1.transpose().triangularView<Eigen::Lower>().solve(s.P.transpose() * d);
+      const Eigen::VectorXd x0 = s.Q1 * u;
+      const Eigen::ColPivHouseholderQR<Eigen::MatrixXd> small(S * s.N);
+      // A nearly singular system (a range of a few grid points) is solved exactly instead.
+      const Eigen::VectorXd diagonal = small.matrixR().diagonal().cwiseAbs();
+      if (!(diagonal.minCoeff() > 1e-11 * diagonal.maxCoeff())) continue;
+      const Eigen::VectorXd x = x0 + s.N * small.solve(q - S * x0);
+      if (!x.allFinite()) continue;
+      double largest = 0.0;
+      for (int r = 0; r < nr; ++r)
+        for (std::size_t i = span[c][r].first; i < span[c][r].second; ++i) {
+          const double Cp = in.samples[i].Cp_over_R;
+          const double fitted = terms.row(static_cast<Eigen::Index>(i)).dot(x.segment(r * s.per, m));
+          largest = std::max(largest, std::abs(fitted - Cp) / std::max(std::abs(Cp), 1e-300));
+        }
+      estimate[c] = largest;
+    }
+    // The estimates rank; the shortlist, and any candidate without an estimate, decide
+    // exactly (stable: ties keep the lower candidate).
+    std::stable_sort(order.begin(), order.end(),
+                     [&](std::size_t a, std::size_t b) { return estimate[a] < estimate[b]; });
+    // Near ties (the largest error sits in a range the breakpoint barely moves) all go to
+    // the exact comparison: within 1e-6 of the best estimate, far above the estimates' error.
+    std::vector<std::size_t> kept(order.begin(), order.begin() + static_cast<std::ptrdiff_t>(shortlist));
+    const double tie = estimate[order.front()] * (1.0 + 1e-6);
+    for (std::size_t k = shortlist; k < count; ++k)
+      if (!std::isfinite(estimate[order[k]]) || estimate[order[k]] <= tie) kept.push_back(order[k]);
+    std::sort(kept.begin(), kept.end());
+    // The exact errors of the shortlist check the estimates: one off by more than 1e-7 (a
+    // range of a few grid points, nearly singular) and every candidate is solved exactly.
+    std::size_t chosen = kept.front();
+    worst = std::numeric_limits<double>::infinity();
+    bool reliable = true;
+    for (std::size_t c : kept) {
+      const double e = worst_Cp_relative(c, in);
+      reliable = reliable && std::abs(e - estimate[c]) <= 1e-7 * e;
+      if (e < worst) worst = e, chosen = c;
+    }
+    if (reliable) return chosen;
+  }
+  std::size_t chosen = 0;
+  worst = std::numeric_limits<double>::infinity();
+  for (std::size_t c : order) {
+    const double e = worst_Cp_relative(c, in);
+    if (e < worst) worst = e, chosen = c;
+  }
+  return chosen;
 }
 
 }  // namespace vibtherm

@@ -3,9 +3,11 @@
 #include <doctest/doctest.h>
 
 #include <cmath>
+#include <limits>
 
 #include "test_species.hpp"
 #include "vibtherm/constants.hpp"
+#include "vibtherm/fit_plan.hpp"
 #include "vibtherm/read_nasa.hpp"
 #include "vibtherm/write_nasa7.hpp"
 #include "vibtherm/write_nasa9.hpp"
@@ -137,6 +139,35 @@ TEST_CASE("auto T_mid is no worse than every candidate it tried") {
     for (const auto& e : fit_samples(in, fixed).errors) w = std::max(w, e.max_Cp_relative);
     CHECK(fit.searched_max_Cp_relative <= w);
   }
+}
+
+TEST_CASE("the shortlisted auto search picks the candidate an exhaustive search picks") {
+  // Exhaustive: every candidate solved by QR and its largest relative Cp error compared.
+  const std::vector<std::vector<double>> theta_sets = {{300.0, 900.0, 1900.0, 4000.0},
+                                                       {150.0, 420.0, 3100.0},
+                                                       {800.0, 800.0, 1200.0, 2600.0, 4700.0, 5200.0},
+                                                       {60.0, 2000.0}};
+  const std::vector<std::pair<NasaForm, const char*>> ranges = {{NasaForm::nasa7, "200:auto:3000"},
+                                                                {NasaForm::nasa7, "300:auto:5000"},
+                                                                {NasaForm::nasa9, "200:1000:auto:6000"}};
+  for (const auto& thetas : theta_sets)
+    for (const auto& [form, text] : ranges) {
+      CAPTURE(text);
+      FitOptions opt;
+      opt.form = form;
+      opt.range = parse_fit_range(text, form);
+      const FitPlan plan(opt);
+      const auto in = einstein_input(thetas, opt.range.breakpoints_K.front(), opt.range.breakpoints_K.back());
+      std::size_t exhaustive = 0;
+      double exhaustive_worst = std::numeric_limits<double>::infinity();
+      for (std::size_t c = 0; c < plan.candidate_count(); ++c) {
+        const double w = plan.worst_Cp_relative(c, in);
+        if (w < exhaustive_worst) exhaustive_worst = w, exhaustive = c;
+      }
+      double worst = 0.0;
+      CHECK(plan.best_candidate(in, worst) == exhaustive);
+      CHECK(worst == exhaustive_worst);
+    }
 }
 
 TEST_CASE("bounds excursions and thresholds are reported") {

@@ -30,6 +30,14 @@ class FitPlan {
   // The largest relative Cp error over the grid of that solution (what `auto` minimises),
   // without converting it to coefficients.
   double worst_Cp_relative(std::size_t candidate, const FitInput& input) const;
+  // The candidate (index) whose solution has the smallest largest relative Cp error: every
+  // candidate estimated from Givens factors of its ranges' weighted rows, gathered in one
+  // pass per range (a few thousand operations each), then the `shortlist` best of those, and any within
+  // 1e-6 of the best estimate, solved by QR as in worst_Cp_relative and compared exactly.
+  // Estimates that disagree with the exact errors, a nearly singular candidate and the
+  // NASA-9 form fall back to solving every candidate exactly. `worst` receives the chosen
+  // one's error.
+  std::size_t best_candidate(const FitInput& input, double& worst, std::size_t shortlist = 4) const;
 
   struct System;
 
