@@ -89,12 +89,18 @@ std::string write_nasa7_record(const Nasa7& sp) {
   check_name(sp);
   std::string out;
   for (const auto& c : sp.comments) out += "! " + c + '\n';
-  std::string l1 = fmt::format("{:<18}{:<6}", sp.name, sp.note);  // cols 1-24
-  l1 += element_fields(sp);                                       // cols 25-44
-  l1 += sp.phase;                                                 // col 45
-  l1 += temperature_field(sp.T_low_K, 10, sp.name);               // cols 46-55
-  l1 += temperature_field(sp.T_high_K, 10, sp.name);              // cols 56-65
-  l1 += temperature_field(sp.T_mid_K, 8, sp.name);                // cols 66-73
+  // An 18-character name would run into the note (readers take the name up to the first
+  // blank): the note then starts one column later, in columns 20-24.
+  const std::string note = sp.name.size() == 18 && !sp.note.empty() ? " " + sp.note : sp.note;
+  if (note.size() > 6)
+    fail({}, fmt::format("species '{}': note '{}' does not fit columns 20-24 after an 18-character name",
+                         sp.name, sp.note));
+  std::string l1 = fmt::format("{:<18}{:<6}", sp.name, note);  // cols 1-24
+  l1 += element_fields(sp);                                    // cols 25-44
+  l1 += sp.phase;                                              // col 45
+  l1 += temperature_field(sp.T_low_K, 10, sp.name);            // cols 46-55
+  l1 += temperature_field(sp.T_high_K, 10, sp.name);           // cols 56-65
+  l1 += temperature_field(sp.T_mid_K, 8, sp.name);             // cols 66-73
   out += numbered(l1, '1');
   const auto& h = sp.high;
   const auto& l = sp.low;

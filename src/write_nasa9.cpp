@@ -52,7 +52,11 @@ std::string write_nasa9_record(const Nasa9& sp) {
          fmt::format("species '{}': NASA-9 needs 1 to 9 temperature ranges, has {}", name, sp.ranges.size()));
 
   // Record 1: name (1-18), comment (19-80).
-  std::string out = pad(name, 18) + field(sp.comment, 62, name, "comment");
+  // An 18-character name would run into the comment (readers take the name up to the first
+  // blank): the comment then starts one column later.
+  const std::string comment =
+      name.size() == 18 && !sp.comment.empty() && sp.comment.front() != ' ' ? " " + sp.comment : sp.comment;
+  std::string out = pad(name, 18) + field(comment, 62, name, "comment");
   while (!out.empty() && out.back() == ' ') out.pop_back();
   out += '\n';
   // Record 2: intervals I2 (1-2), date code (4-9), 5 × (A2, F6.2) (11-50), phase I2 (51-52),

@@ -9,6 +9,7 @@
 #include "test_nasa.hpp"
 #include "test_text.hpp"
 #include "vibtherm/error.hpp"
+#include "vibtherm/read_nasa.hpp"
 
 using namespace vibtherm;
 
@@ -118,4 +119,20 @@ TEST_CASE("a coefficient that is not finite is an error, never nan or inf in the
   n.high[6] = -std::numeric_limits<double>::infinity();
   CHECK_THROWS_WITH_AS(write_nasa7({n}), "error: species 'O2': coefficient -inf cannot be written",
                        InputError);
+}
+
+TEST_CASE("an 18-character name with a note reads back as the name") {
+  // The pipeline fuzz target's round trip: 'frequencies:ethane' followed at once by the
+  // note 'noHf' read back as 'frequencies:ethanenoHf' (readers take the name up to the
+  // first blank, NASA SP-273 practice). The note moves one column right.
+  Nasa7 n = o2_record();
+  n.name = "frequencies:ethane";
+  n.note = "noHf";
+  const std::string text = write_nasa7({n});
+  const auto back = read_nasa(text, "t.dat");
+  REQUIRE(back.size() == 1);
+  CHECK(polynomial_name(back[0]) == "frequencies:ethane");
+  CHECK(cols(lines_of(text)[2], 19, 24) == " noHf ");
+  n.note = "ABCDEF";  // six characters no longer fit after the blank
+  CHECK_THROWS_AS(write_nasa7_record(n), InputError);
 }

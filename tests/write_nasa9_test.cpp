@@ -119,3 +119,14 @@ TEST_CASE("NASA-9: a coefficient that is not finite is an error") {
   CHECK_THROWS_WITH_AS(write_nasa9_record(n), "error: species 'CH4': coefficient inf cannot be written",
                        InputError);
 }
+
+TEST_CASE("NASA-9: an 18-character name with a comment reads back as the name") {
+  // As for NASA-7 (readers take the name up to the first blank): the comment then starts
+  // one column later instead of running into the name.
+  Nasa9 n = sample();
+  n.name = "frequencies:ethane";
+  const auto back = read_nasa(write_nasa9({n}), "n9");
+  REQUIRE(back.size() == 1);
+  CHECK(std::get<Nasa9>(back[0]).name == "frequencies:ethane");
+  CHECK(std::get<Nasa9>(back[0]).comment == "test record");
+}
